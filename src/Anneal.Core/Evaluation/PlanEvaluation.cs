@@ -1,0 +1,62 @@
+namespace Anneal.Core.Evaluation;
+
+/// <summary>Each part of the objective; parts the objective does not count are zero.</summary>
+public sealed record CostBreakdown
+{
+    public double Fixed { get; init; }
+    public double Distance { get; init; }
+    public double Time { get; init; }
+
+    /// <summary>The vehicle count's share under vehicles-then-distance (vehicles × the vehicle weight).</summary>
+    public double Vehicles { get; init; }
+
+    public double Lateness { get; init; }
+    public double Overload { get; init; }
+    public double Overtime { get; init; }
+    public double DurationExcess { get; init; }
+    public double Unserved { get; init; }
+
+    public double Total => Fixed + Distance + Time + Vehicles + Lateness + Overload + Overtime + DurationExcess + Unserved;
+}
+
+/// <summary>A broken rule: which rule, where, by how much, in words.</summary>
+public sealed record Violation(string Rule, bool Hard, string? Vehicle, string? Stop, double Amount, string Message);
+
+public sealed record RouteEvaluation(
+    int Vehicle,
+    int[] Stops,
+    RouteMetrics Metrics,
+    VisitTimes[] Visits,
+    double[][] LoadAfter,
+    double Objective,
+    bool Feasible);
+
+public sealed record PlanEvaluation(
+    IReadOnlyList<RouteEvaluation> Routes,
+    IReadOnlyList<int> Unserved,
+    CostBreakdown Breakdown,
+    IReadOnlyList<Violation> Violations)
+{
+    public double Objective => Breakdown.Total;
+
+    /// <summary>No hard rule is broken.</summary>
+    public bool Feasible
+    {
+        get
+        {
+            foreach (var v in Violations)
+            {
+                if (v.Hard)
+                {
+                    return false;
+                }
+            }
+
+            return true;
+        }
+    }
+
+    public int VehiclesUsed => Routes.Count(r => r.Stops.Length > 0);
+    public double Distance => Routes.Sum(r => r.Metrics.Distance);
+    public double Duration => Routes.Sum(r => r.Metrics.Duration);
+}

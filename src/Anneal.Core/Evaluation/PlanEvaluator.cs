@@ -1,0 +1,224 @@
+using Anneal.Core.Model;
+using Anneal.Core.Plans;
+
+namespace Anneal.Core.Evaluation;
+
+/// <summary>The one evaluator: schedule, cost breakdown and verdict per hard rule for a whole plan.</summary>
+public static class PlanEvaluator
+{
+    private const double Tolerance = 1e-6;
+
+    public static PlanEvaluation Evaluate(Instance instance, Plan plan)
+    {
+        var structure = plan.StructureErrors(instance);
+        if (structure.Count > 0)
+        {
+            throw new ArgumentException("The plan is malformed: " + string.Join("; ", structure), nameof(plan));
+        }
+
+        var rules = instance.Rules;
+        var routes = new List<RouteEvaluation>();
+        var violations = new List<Violation>();
+        var served = new bool[instance.StopCount];
+        double fixedCost = 0, distanceCost = 0, timeCost = 0, vehicles = 0, lateness = 0, overload = 0, overtime = 0, durationExcess = 0;
+        int dims = instance.DimensionCount;
+
+        foreach (var route in plan.Routes)
+        {
+            var v = instance.Vehicles[route.Vehicle];
+            var visits = new VisitTimes[route.Stops.Length];
+            var m = RouteScheduler.Schedule(instance, route.Vehicle, route.Stops, visits);
+            var loads = LoadsAfter(instance, route.Stops);
+            foreach (int s in route.Stops)
+            {
+                served[s] = true;
+            }
+
+            double objective = CostModel.RouteObjective(instance, route.Vehicle, m);
+            routes.Add(new RouteEvaluation(route.Vehicle, route.Stops, m, visits, loads, objective, CostModel.RouteFeasible(instance, m, Tolerance)));
+            if (m.StopCount == 0)
+            {
+                continue;
+            }
+
+            switch (instance.Objective)
+            {
+                case Objective.Cost:
+                    fixedCost += v.FixedCost;
+                    distanceCost += m.Distance * v.CostPerDistance;
+                    timeCost += m.Duration / instance.TimeUnitsPerHour * v.CostPerHour;
+                    break;
+                case Objective.Distance:
+                    distanceCost += m.Distance;
+                    break;
+                default:
+                    vehicles += instance.VehicleWeight;
+                    distanceCost += m.Distance;
+                    break;
+            }
+
+            if (!rules.TimeWindows.Hard)
+            {
+                lateness += m.TimeWindowViolation * rules.TimeWindows.Price;
+            }
+
+            if (!rules.Capacity.Hard)
+            {
+                overload += m.Overload * rules.Capacity.Price;
+            }
+
+            if (!rules.ShiftEnd.Hard)
+            {
+                overtime += m.Overtime * rules.ShiftEnd.Price;
+            }
+
+            if (!rules.MaxDuration.Hard)
+            {
+                durationExcess += m.DurationExcess * rules.MaxDuration.Price;
+            }
+
+            ReportRoute(instance, route, m, visits, violations);
+        }
+
+        var unserved = new List<int>();
+        double unservedCost = 0;
+        for (int s = 0; s < instance.StopCount; s++)
+        {
+            if (served[s])
+            {
+                continue;
+            }
+
+            unserved.Add(s);
+            unservedCost += CostModel.UnservedObjective(instance, s);
+            bool mayDrop = instance.MayDrop(s);
+            violations.Add(new Violation("unserved", !mayDrop, null, instance.Stops[s].Id, 1,
+                mayDrop
+                    ? $"stop {instance.Stops[s].Id} is left unserved (penalty {instance.UnservedPrice(s):0.##})"
+                    : $"stop {instance.Stops[s].Id} must be served but is on no route"));
+        }
+
+        var breakdown = new CostBreakdown
+        {
+            Fixed = fixedCost,
+            Distance = distanceCost,
+            Time = timeCost,
+            Vehicles = vehicles,
+            Lateness = lateness,
+            Overload = overload,
+            Overtime = overtime,
+            DurationExcess = durationExcess,
+            Unserved = unservedCost,
+        };
+        return new PlanEvaluation(routes, unserved, breakdown, violations);
+    }
+
+    /// <summary>The search's cost of a plan under the given hard-rule weights.</summary>
+    public static double Penalized(Instance instance, Plan plan, in PenaltyWeights weights)
+    {
+        var served = new bool[instance.StopCount];
+        double total = 0;
+        foreach (var route in plan.Routes)
+        {
+            var m = RouteScheduler.Measure(instance, route.Vehicle, route.Stops);
+            total += CostModel.RoutePenalized(instance, route.Vehicle, m, weights);
+            foreach (int s in route.Stops)
+            {
+                served[s] = true;
+            }
+        }
+
+        for (int s = 0; s < instance.StopCount; s++)
+        {
+            if (!served[s])
+            {
+                total += CostModel.UnservedObjective(instance, s) + CostModel.UnservedViolation(instance, s, weights);
+            }
+        }
+
+        return total;
+    }
+
+    private static double[][] LoadsAfter(Instance instance, int[] stops)
+    {
+        int dims = instance.DimensionCount;
+        var load = new double[dims];
+        foreach (int s in stops)
+        {
+            for (int d = 0; d < dims; d++)
+            {
+                load[d] += instance.Demand(s, d);
+            }
+        }
+
+        var after = new double[stops.Length][];
+        for (int k = 0; k < stops.Length; k++)
+        {
+            for (int d = 0; d < dims; d++)
+            {
+                load[d] -= instance.Demand(stops[k], d);
+            }
+
+            after[k] = (double[])load.Clone();
+        }
+
+        return after;
+    }
+
+    private static void ReportRoute(Instance instance, PlannedRoute route, in RouteMetrics m, VisitTimes[] visits, List<Violation> violations)
+    {
+        var rules = instance.Rules;
+        var v = instance.Vehicles[route.Vehicle];
+        string unit = string.IsNullOrEmpty(instance.TimeUnit) ? "time units" : instance.TimeUnit;
+        for (int k = 0; k < route.Stops.Length; k++)
+        {
+            if (visits[k].Late > Tolerance)
+            {
+                var stop = instance.Stops[route.Stops[k]];
+                string how = rules.TimeWindows.Hard ? "arrives after its window closes" : "is served late";
+                violations.Add(new Violation("time-window", rules.TimeWindows.Hard, v.Id, stop.Id, visits[k].Late,
+                    $"stop {stop.Id} {how} by {visits[k].Late:0.##} {unit} (vehicle {v.Id}, position {k + 1})"));
+            }
+
+            ulong missing = instance.Stops[route.Stops[k]].RequiredSkills & ~v.Skills;
+            if (missing != 0)
+            {
+                var stop = instance.Stops[route.Stops[k]];
+                violations.Add(new Violation("skills", true, v.Id, stop.Id, System.Numerics.BitOperations.PopCount(missing),
+                    $"stop {stop.Id} needs {SkillList(instance, missing)}, which vehicle {v.Id} lacks"));
+            }
+        }
+
+        if (m.Overload > Tolerance)
+        {
+            violations.Add(new Violation("capacity", rules.Capacity.Hard, v.Id, null, m.Overload,
+                $"vehicle {v.Id} is loaded {m.Overload:0.##} units over its capacity"));
+        }
+
+        if (m.Overtime > Tolerance)
+        {
+            violations.Add(new Violation("shift-end", rules.ShiftEnd.Hard, v.Id, null, m.Overtime,
+                $"vehicle {v.Id} returns {m.Overtime:0.##} {unit} after its shift ends"));
+        }
+
+        if (m.DurationExcess > Tolerance)
+        {
+            violations.Add(new Violation("max-duration", rules.MaxDuration.Hard, v.Id, null, m.DurationExcess,
+                $"route of vehicle {v.Id} lasts {m.DurationExcess:0.##} {unit} longer than allowed"));
+        }
+    }
+
+    private static string SkillList(Instance instance, ulong mask)
+    {
+        var names = new List<string>();
+        for (int b = 0; b < instance.SkillNames.Count; b++)
+        {
+            if ((mask & (1UL << b)) != 0)
+            {
+                names.Add(instance.SkillNames[b]);
+            }
+        }
+
+        return string.Join(", ", names);
+    }
+}

@@ -1,0 +1,141 @@
+using System.Numerics;
+using Anneal.Core.Model;
+
+namespace Anneal.Core.Evaluation;
+
+/// <summary>
+/// The exact forward pass over one route: the truth every faster evaluation is tested against.
+/// <para>
+/// Service starts at max(arrival, open) of the first window still open on arrival. Past the last window a soft
+/// window makes the truck late (service starts on arrival, later stops are delayed too); a hard window is relaxed
+/// by time warp (service starts at the close, the warp is the violation, later stops are not delayed).
+/// </para>
+/// <para>
+/// The vehicle leaves at the start of its shift, then departure is delayed by the most it can without making any
+/// stop later or moving the return (forward time slack, Savelsbergh 1985), so waiting is not paid as driver time.
+/// </para>
+/// </summary>
+public static class RouteScheduler
+{
+    public static RouteMetrics Measure(Instance instance, int vehicle, ReadOnlySpan<int> stops) =>
+        Schedule(instance, vehicle, stops, Span<VisitTimes>.Empty);
+
+    /// <summary>Measures the route; when <paramref name="visits"/> is not empty, also writes each stop's times.</summary>
+    public static RouteMetrics Schedule(Instance instance, int vehicle, ReadOnlySpan<int> stops, Span<VisitTimes> visits)
+    {
+        var m = default(RouteMetrics);
+        m.StopCount = stops.Length;
+        if (stops.Length == 0)
+        {
+            return m;
+        }
+
+        var v = instance.Vehicles[vehicle];
+        var travel = instance.Travel;
+        int dims = instance.DimensionCount;
+        int home = instance.DepotLocation(v.StartDepot);
+        int end = instance.DepotLocation(v.EndDepot);
+
+        double departureDelay = Forward(instance, v, stops, v.ShiftStart, ref m, Span<VisitTimes>.Empty);
+        double departure = v.ShiftStart + departureDelay;
+        if (!visits.IsEmpty)
+        {
+            var check = default(RouteMetrics);
+            Forward(instance, v, stops, departure, ref check, visits);
+        }
+
+        m.Departure = departure;
+        double warp = instance.Rules.TimeWindows.Hard ? m.TimeWindowViolation : 0;
+        m.Duration = m.Return - departure + warp;
+        m.Overtime = Math.Max(0, m.Return - v.ShiftEnd);
+        m.DurationExcess = Math.Max(0, m.Duration - v.MaxDuration);
+
+        // Load: everything is loaded at the start depot.
+        double overload = 0;
+        for (int d = 0; d < dims; d++)
+        {
+            double load = 0;
+            for (int k = 0; k < stops.Length; k++)
+            {
+                load += instance.DemandFlat[(stops[k] * dims) + d];
+            }
+
+            overload += Math.Max(0, load - instance.CapacityFlat[(vehicle * dims) + d]);
+        }
+
+        m.Overload = overload;
+
+        ulong needed = 0;
+        for (int k = 0; k < stops.Length; k++)
+        {
+            needed |= instance.Stops[stops[k]].RequiredSkills;
+        }
+
+        m.MissingSkills = BitOperations.PopCount(needed & ~v.Skills);
+
+        double distance = travel.Distance(home, stops[0]);
+        for (int k = 1; k < stops.Length; k++)
+        {
+            distance += travel.Distance(stops[k - 1], stops[k]);
+        }
+
+        m.Distance = distance + travel.Distance(stops[^1], end);
+        return m;
+    }
+
+    /// <summary>One pass from <paramref name="departure"/>; fills violation and return time, and returns the forward slack.</summary>
+    private static double Forward(Instance instance, Vehicle v, ReadOnlySpan<int> stops, double departure, ref RouteMetrics m, Span<VisitTimes> visits)
+    {
+        var travel = instance.Travel;
+        bool hard = instance.Rules.TimeWindows.Hard;
+        int prev = instance.DepotLocation(v.StartDepot);
+        double t = departure;
+        double cumulativeWait = 0;
+        double slack = v.ShiftEnd - departure;
+        double violation = 0;
+        for (int k = 0; k < stops.Length; k++)
+        {
+            int s = stops[k];
+            double arrival = t + travel.Duration(prev, s);
+            int first = instance.WindowOffset[s];
+            int last = instance.WindowOffset[s + 1] - 1;
+            int w = first;
+            while (w <= last && instance.WindowClose[w] < arrival)
+            {
+                w++;
+            }
+
+            double start;
+            double late = 0;
+            double wait = 0;
+            if (w <= last)
+            {
+                start = Math.Max(arrival, instance.WindowOpen[w]);
+                wait = start - arrival;
+                cumulativeWait += wait;
+                slack = Math.Min(slack, cumulativeWait + (instance.WindowClose[w] - start));
+            }
+            else
+            {
+                double close = instance.WindowClose[last];
+                late = arrival - close;
+                start = hard ? close : arrival;
+                slack = Math.Min(slack, cumulativeWait);
+            }
+
+            violation += late;
+            double leave = start + instance.Service[s];
+            if (!visits.IsEmpty)
+            {
+                visits[k] = new VisitTimes { Arrival = arrival, Wait = wait, Start = start, Departure = leave, Late = late };
+            }
+
+            t = leave;
+            prev = s;
+        }
+
+        m.Return = t + travel.Duration(prev, instance.DepotLocation(v.EndDepot));
+        m.TimeWindowViolation = violation;
+        return Math.Max(0, Math.Min(slack, cumulativeWait));
+    }
+}

@@ -1,0 +1,26 @@
+namespace Anneal.Core.Model;
+
+/// <summary>Whether a rule may be broken, and the price of breaking it when it may.</summary>
+public readonly record struct Rule(bool Hard, double Price)
+{
+    public static Rule HardRule => new(true, 0);
+    public static Rule Soft(double price) => new(false, price);
+}
+
+/// <summary>
+/// Per-rule choice of hard or soft. Prices: time windows per time unit late, capacity per unit over
+/// (summed over dimensions), shift end per time unit of overtime, maximum duration per time unit over,
+/// unserved per stop (a stop's own penalty takes precedence). Skills are always hard.
+/// </summary>
+public sealed record RuleSet
+{
+    public Rule TimeWindows { get; init; } = Rule.HardRule;
+    public Rule Capacity { get; init; } = Rule.HardRule;
+    public Rule ShiftEnd { get; init; } = Rule.HardRule;
+    public Rule MaxDuration { get; init; } = Rule.HardRule;
+
+    /// <summary>Hard: mandatory stops must be served (optional ones may still be dropped at their penalty).</summary>
+    public Rule Unserved { get; init; } = Rule.HardRule;
+
+    public static RuleSet AllHard { get; } = new();
+}

@@ -1,0 +1,26 @@
+namespace Anneal.Core.Model;
+
+/// <summary>A place to deliver to. Demand is loaded at the vehicle's start depot.</summary>
+public sealed record Stop
+{
+    public required string Id { get; init; }
+    public required double X { get; init; }
+    public required double Y { get; init; }
+
+    /// <summary>One value per demand dimension of the instance.</summary>
+    public required double[] Demand { get; init; }
+
+    public double ServiceTime { get; init; }
+
+    /// <summary>Sorted, non-overlapping windows; at least one.</summary>
+    public required TimeWindow[] Windows { get; init; }
+
+    /// <summary>Bit i set means the stop needs skill i of <see cref="Instance.SkillNames"/>.</summary>
+    public ulong RequiredSkills { get; init; }
+
+    /// <summary>An optional stop may be left unserved at <see cref="UnservedPenalty"/>.</summary>
+    public bool Optional { get; init; }
+
+    /// <summary>Price of leaving the stop unserved; NaN means the rule set's default price.</summary>
+    public double UnservedPenalty { get; init; } = double.NaN;
+}

@@ -1,0 +1,44 @@
+namespace Anneal.Formats.Input;
+
+/// <summary>Front door for reading any supported input: a CSV job folder or a benchmark file, detected from content.</summary>
+public static class InputLoader
+{
+    /// <exception cref="InputException">with every problem found.</exception>
+    public static LoadedInput Load(string path)
+    {
+        if (Directory.Exists(path))
+        {
+            return CsvJobReader.Read(path);
+        }
+
+        if (!File.Exists(path))
+        {
+            throw new InputException(new InputProblem(path, null, null, null,
+                "no such file or folder", "give the path of a CSV job folder, a Solomon .txt file or a CVRPLIB .vrp file"));
+        }
+
+        string text;
+        try
+        {
+            text = File.ReadAllText(path);
+        }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        {
+            throw new InputException(new InputProblem(path, null, null, null, "the file cannot be read: " + e.Message, "check the path and its permissions"));
+        }
+
+        if (CvrplibReader.LooksLike(text))
+        {
+            return new LoadedInput(CvrplibReader.Parse(text, path), new JobSettings { Objective = Core.Model.Objective.Distance }, "cvrplib", path);
+        }
+
+        if (SolomonReader.LooksLike(text))
+        {
+            return new LoadedInput(SolomonReader.Parse(text, path), new JobSettings { Objective = Core.Model.Objective.Distance }, "solomon", path);
+        }
+
+        throw new InputException(new InputProblem(path, 1, null, null,
+            "the format is not recognised (neither a Solomon VRPTW file nor a CVRPLIB/TSPLIB .vrp file)",
+            "give a CSV job folder, a Solomon text file (VEHICLE and CUSTOMER sections) or a CVRPLIB file (NODE_COORD_SECTION)"));
+    }
+}

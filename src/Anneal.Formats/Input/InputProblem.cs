@@ -1,0 +1,28 @@
+namespace Anneal.Formats.Input;
+
+/// <summary>One thing wrong with an input file, located precisely enough to fix it.</summary>
+/// <param name="File">File name as the user gave it (or relative to the job folder).</param>
+/// <param name="Row">1-based line number in the file (the header is line 1); null when it concerns the whole file.</param>
+/// <param name="Column">Column name or field; null when the whole row or file is concerned.</param>
+/// <param name="Value">The offending text as found, or null.</param>
+/// <param name="Problem">What is wrong, in plain words.</param>
+/// <param name="Fix">How to put it right.</param>
+public sealed record InputProblem(string File, int? Row, string? Column, string? Value, string Problem, string Fix)
+{
+    public override string ToString()
+    {
+        var where = File;
+        if (Row is not null)
+        {
+            where += $", row {Row}";
+        }
+
+        if (Column is not null)
+        {
+            where += $", column '{Column}'";
+        }
+
+        var value = Value is null ? string.Empty : $" (value '{Value}')";
+        return $"{where}: {Problem}{value}. Fix: {Fix}";
+    }
+}

@@ -1,0 +1,18 @@
+namespace Anneal.Search.Running;
+
+/// <summary>How long and how a solver may run. The first limit reached stops it.</summary>
+public sealed record SolveOptions
+{
+    public TimeSpan TimeLimit { get; init; } = TimeSpan.FromSeconds(10);
+
+    /// <summary>Stop after this many iterations; with a fixed seed this makes a run reproducible.</summary>
+    public long? IterationLimit { get; init; }
+
+    public int Seed { get; init; } = 1;
+
+    /// <summary>Stop as soon as a feasible plan at or below this objective is found.</summary>
+    public double? TargetObjective { get; init; }
+
+    /// <summary>Independent seeded searches run in parallel by one solver; the best is kept.</summary>
+    public int Threads { get; init; } = 1;
+}

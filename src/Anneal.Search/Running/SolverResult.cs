@@ -1,0 +1,16 @@
+using Anneal.Core.Plans;
+
+namespace Anneal.Search.Running;
+
+/// <summary>What one solver returned. The plan is judged by the evaluator, never by the solver's own numbers.</summary>
+/// <param name="Status">"completed", "interrupted", "time limit", "no solution", …</param>
+/// <param name="Notes">Anything a user should know (approximated rules, strategy choices).</param>
+public sealed record SolverResult(
+    string Solver,
+    Plan Plan,
+    double Seconds,
+    double SecondsToBest,
+    IReadOnlyList<TracePoint> Trace,
+    string Status,
+    double? LowerBound = null,
+    IReadOnlyList<string>? Notes = null);
