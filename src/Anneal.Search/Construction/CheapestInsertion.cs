@@ -1,0 +1,115 @@
+using Anneal.Search.Moves;
+using Anneal.Search.Neighbourhoods;
+using Anneal.Search.Representation;
+
+namespace Anneal.Search.Construction;
+
+/// <summary>
+/// Inserts unserved stops one at a time at their cheapest position next to a granular neighbour, or on an empty
+/// route, under the state's penalty weights; droppable stops stay out when inserting would cost more than their
+/// penalty. Always returns a plan: when no position is free of violations the cheapest violating one is taken.
+/// </summary>
+public static class CheapestInsertion
+{
+    public static void Run(SearchState state, CandidateLists candidates, ReadOnlySpan<int> order, CancellationToken cancel = default)
+    {
+        var move = default(MoveDraft);
+        var best = default(MoveDraft);
+        foreach (int u in order)
+        {
+            if (cancel.IsCancellationRequested)
+            {
+                return;
+            }
+
+            if (state.RouteOf(u) >= 0)
+            {
+                continue;
+            }
+
+            double bestDelta = double.PositiveInfinity;
+            bool routedNeighbour = false;
+            foreach (int v in candidates.Of(u))
+            {
+                if (state.RouteOf(v) < 0)
+                {
+                    continue;
+                }
+
+                routedNeighbour = true;
+                Consider(state, ref move, ref best, ref bestDelta, MoveBuilder.Insert(state, ref move, u, v, after: true));
+                Consider(state, ref move, ref best, ref bestDelta, MoveBuilder.Insert(state, ref move, u, v, after: false));
+            }
+
+            int empty = FirstEmptyRoute(state);
+            if (empty >= 0)
+            {
+                Consider(state, ref move, ref best, ref bestDelta, MoveBuilder.Insert(state, ref move, u, -1, false, empty));
+            }
+
+            if (!routedNeighbour || double.IsPositiveInfinity(bestDelta))
+            {
+                // Every route is full of strangers: try every position once.
+                for (int r = 0; r < state.RouteCount; r++)
+                {
+                    for (int p = 0; p < state.Length(r); p++)
+                    {
+                        Consider(state, ref move, ref best, ref bestDelta, MoveBuilder.Insert(state, ref move, u, state.StopAt(r, p), after: true));
+                    }
+                }
+            }
+
+            bool mayStayOut = state.Instance.MayDrop(u) && bestDelta >= 0;
+            if (!double.IsPositiveInfinity(bestDelta) && !mayStayOut)
+            {
+                state.Apply(ref best);
+            }
+        }
+    }
+
+    private static void Consider(SearchState state, ref MoveDraft move, ref MoveDraft best, ref double bestDelta, bool built)
+    {
+        if (!built)
+        {
+            return;
+        }
+
+        double d = state.Delta(ref move);
+        if (d < bestDelta)
+        {
+            bestDelta = d;
+            best = move;
+        }
+    }
+
+    /// <summary>An unused vehicle, or -1 when every vehicle has a route.</summary>
+    public static int FirstEmptyRoute(SearchState state)
+    {
+        for (int r = 0; r < state.RouteCount; r++)
+        {
+            if (state.Length(r) == 0)
+            {
+                return r;
+            }
+        }
+
+        return -1;
+    }
+
+    /// <summary>Farthest stops from their depot first: they are the hardest to fit late (common practice for seeding).</summary>
+    public static int[] FarthestFirst(Core.Model.Instance instance)
+    {
+        int n = instance.StopCount;
+        var order = new int[n];
+        var key = new double[n];
+        int depot = instance.Depots.Count > 0 ? instance.DepotLocation(0) : 0;
+        for (int i = 0; i < n; i++)
+        {
+            order[i] = i;
+            key[i] = -instance.Travel.Distance(depot, i);
+        }
+
+        Array.Sort(key, order);
+        return order;
+    }
+}

@@ -1,0 +1,14 @@
+namespace Anneal.Search.Moves;
+
+/// <summary>The neighbourhoods (Osman 1993; Potvin &amp; Rousseau 1995; Taillard et al. 1997).</summary>
+public enum MoveKind : byte
+{
+    Relocate,
+    RelocateChain,
+    Swap,
+    TwoOpt,
+    TwoOptStar,
+    Cross,
+    Drop,
+    Insert,
+}

@@ -1,0 +1,40 @@
+using Anneal.Core.Evaluation;
+using Anneal.Core.Model;
+
+namespace Anneal.Search.Representation;
+
+/// <summary>Starting prices for hard-rule violations, scaled to the instance's typical arc cost.</summary>
+public static class InitialWeights
+{
+    public static PenaltyWeights For(Instance instance, double factor)
+    {
+        double arc = TypicalArcCost(instance);
+        return PenaltyWeights.Uniform(Math.Max(1e-6, arc * factor / 10));
+    }
+
+    /// <summary>Mean cost of a depot-to-stop arc under the objective (distance, or money per km for cost).</summary>
+    public static double TypicalArcCost(Instance instance)
+    {
+        int n = instance.StopCount;
+        if (n == 0 || instance.Depots.Count == 0)
+        {
+            return 1;
+        }
+
+        double sum = 0;
+        int depot = instance.DepotLocation(0);
+        for (int i = 0; i < n; i++)
+        {
+            sum += instance.Travel.Distance(depot, i);
+        }
+
+        double perKm = 1;
+        if (instance.Objective == Objective.Cost && instance.Vehicles.Count > 0)
+        {
+            var v = instance.Vehicles[0];
+            perKm = Math.Max(v.CostPerDistance + (v.CostPerHour / instance.TimeUnitsPerHour * instance.Travel.TimePerDistance), 1e-3);
+        }
+
+        return Math.Max(1e-6, sum / n * perKm);
+    }
+}

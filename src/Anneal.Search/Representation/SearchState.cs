@@ -1,0 +1,509 @@
+using Anneal.Core.Evaluation;
+using Anneal.Core.Model;
+using Anneal.Core.Plans;
+using Anneal.Search.Moves;
+
+namespace Anneal.Search.Representation;
+
+/// <summary>
+/// The solution a search works on: one route per vehicle (possibly empty), positions of every stop, the unserved
+/// pool, per-route prefix and suffix segment summaries, and cached route costs under the current penalty weights.
+/// </summary>
+public sealed class SearchState
+{
+    public Instance Instance { get; }
+    public int StopCount { get; }
+    public int RouteCount { get; }
+
+    /// <summary>Segment concatenation is exact here: hard single windows and at most four dimensions.</summary>
+    public bool FastPath { get; }
+
+    private readonly int[][] _stops;
+    private readonly int[] _length;
+    private readonly int[] _routeOf;
+    private readonly int[] _posOf;
+    private readonly Segment[][] _prefix;
+    private readonly Segment[][] _suffix;
+    private readonly Segment[] _node;
+    private readonly Segment[] _depotStart;
+    private readonly Segment[] _depotEnd;
+    private readonly RouteMetrics[] _metrics;
+    private readonly double[] _objective;
+    private readonly double[] _penalized;
+    private readonly bool[] _feasible;
+    private readonly int[] _unserved;
+    private readonly int[] _unservedIndex;
+    private int _unservedCount;
+    private int _infeasibleRoutes;
+    private int _mandatoryUnserved;
+    private readonly int[] _scratch;
+    private readonly int[] _scratchB;
+    private PenaltyWeights _weights;
+
+    public SearchState(Instance instance, PenaltyWeights weights)
+    {
+        Instance = instance;
+        StopCount = instance.StopCount;
+        RouteCount = instance.Vehicles.Count;
+        _weights = weights;
+        FastPath = instance.Rules.TimeWindows.Hard && instance.SingleWindows && instance.DimensionCount <= 4;
+        int n = StopCount;
+        _stops = new int[RouteCount][];
+        _prefix = new Segment[RouteCount][];
+        _suffix = new Segment[RouteCount][];
+        _length = new int[RouteCount];
+        for (int r = 0; r < RouteCount; r++)
+        {
+            _stops[r] = new int[8];
+            _prefix[r] = new Segment[8];
+            _suffix[r] = new Segment[8];
+        }
+
+        _routeOf = new int[n];
+        _posOf = new int[n];
+        _unserved = new int[n];
+        _unservedIndex = new int[n];
+        _scratch = new int[n + 1];
+        _scratchB = new int[n + 1];
+        _metrics = new RouteMetrics[RouteCount];
+        _objective = new double[RouteCount];
+        _penalized = new double[RouteCount];
+        _feasible = new bool[RouteCount];
+        Array.Fill(_feasible, true);
+        _node = new Segment[n];
+        for (int i = 0; i < n; i++)
+        {
+            var hull = instance.Hull(i);
+            _node[i] = Segment.Node(i, instance.ServiceTime(i), hull.Open, hull.Close,
+                Dim(instance, i, 0), Dim(instance, i, 1), Dim(instance, i, 2), Dim(instance, i, 3), instance.Stops[i].RequiredSkills);
+        }
+
+        _depotStart = new Segment[RouteCount];
+        _depotEnd = new Segment[RouteCount];
+        for (int v = 0; v < RouteCount; v++)
+        {
+            var veh = instance.Vehicles[v];
+            _depotStart[v] = Segment.Depot(instance.DepotLocation(veh.StartDepot), veh.ShiftStart, veh.ShiftEnd);
+            _depotEnd[v] = Segment.Depot(instance.DepotLocation(veh.EndDepot), double.NegativeInfinity, double.PositiveInfinity);
+        }
+
+        for (int i = 0; i < n; i++)
+        {
+            _routeOf[i] = -1;
+            AddUnserved(i);
+        }
+    }
+
+    private static double Dim(Instance instance, int stop, int d) => d < instance.DimensionCount ? instance.Demand(stop, d) : 0;
+
+    public PenaltyWeights Weights => _weights;
+
+    public int RouteOf(int stop) => _routeOf[stop];
+    public int PositionOf(int stop) => _posOf[stop];
+    public int Length(int route) => _length[route];
+    public int StopAt(int route, int position) => _stops[route][position];
+    public ReadOnlySpan<int> Route(int route) => _stops[route].AsSpan(0, _length[route]);
+    public int UnservedCount => _unservedCount;
+    public int UnservedAt(int index) => _unserved[index];
+    public double RoutePenalizedCost(int route) => _penalized[route];
+    public ref readonly RouteMetrics Metrics(int route) => ref _metrics[route];
+
+    /// <summary>No hard rule broken: every route feasible and no mandatory stop unserved.</summary>
+    public bool Feasible => _infeasibleRoutes == 0 && _mandatoryUnserved == 0;
+
+    /// <summary>The reported objective (no search penalties), summed afresh.</summary>
+    public double Objective()
+    {
+        double total = 0;
+        for (int r = 0; r < RouteCount; r++)
+        {
+            total += _objective[r];
+        }
+
+        for (int k = 0; k < _unservedCount; k++)
+        {
+            total += CostModel.UnservedObjective(Instance, _unserved[k]);
+        }
+
+        return total;
+    }
+
+    /// <summary>Objective plus weighted hard-rule violations, summed afresh.</summary>
+    public double Penalized()
+    {
+        double total = 0;
+        for (int r = 0; r < RouteCount; r++)
+        {
+            total += _penalized[r];
+        }
+
+        for (int k = 0; k < _unservedCount; k++)
+        {
+            total += UnservedCost(_unserved[k]);
+        }
+
+        return total;
+    }
+
+    public double UnservedCost(int stop) => CostModel.UnservedObjective(Instance, stop) + CostModel.UnservedViolation(Instance, stop, _weights);
+
+    public int UsedRoutes
+    {
+        get
+        {
+            int used = 0;
+            for (int r = 0; r < RouteCount; r++)
+            {
+                if (_length[r] > 0)
+                {
+                    used++;
+                }
+            }
+
+            return used;
+        }
+    }
+
+    public void SetWeights(in PenaltyWeights weights)
+    {
+        _weights = weights;
+        for (int r = 0; r < RouteCount; r++)
+        {
+            _penalized[r] = CostModel.RoutePenalized(Instance, r, _metrics[r], _weights);
+        }
+    }
+
+    public void Load(Plan plan)
+    {
+        for (int r = 0; r < RouteCount; r++)
+        {
+            for (int k = 0; k < _length[r]; k++)
+            {
+                int s = _stops[r][k];
+                _routeOf[s] = -1;
+                AddUnserved(s);
+            }
+
+            _length[r] = 0;
+            Refresh(r);
+        }
+
+        foreach (var route in plan.Routes)
+        {
+            var target = route.Stops;
+            EnsureCapacity(route.Vehicle, target.Length);
+            for (int k = 0; k < target.Length; k++)
+            {
+                RemoveUnserved(target[k]);
+                _stops[route.Vehicle][k] = target[k];
+            }
+
+            _length[route.Vehicle] = target.Length;
+            Refresh(route.Vehicle);
+        }
+    }
+
+    public Plan ToPlan()
+    {
+        var routes = new List<PlannedRoute>();
+        for (int r = 0; r < RouteCount; r++)
+        {
+            if (_length[r] > 0)
+            {
+                routes.Add(new PlannedRoute(r, _stops[r].AsSpan(0, _length[r]).ToArray()));
+            }
+        }
+
+        return new Plan(routes);
+    }
+
+    /// <summary>Copies the routes into a flat snapshot (route lengths then stops) for cheap best-so-far keeping.</summary>
+    public void CopyTo(int[] lengths, int[][] stops)
+    {
+        for (int r = 0; r < RouteCount; r++)
+        {
+            lengths[r] = _length[r];
+            if (stops[r].Length < _length[r])
+            {
+                stops[r] = new int[Math.Max(_length[r], stops[r].Length * 2)];
+            }
+
+            Array.Copy(_stops[r], stops[r], _length[r]);
+        }
+    }
+
+    /// <summary>Penalized cost change if the move were applied (cost of new routes − old routes ± unserved).</summary>
+    public double Delta(ref MoveDraft move)
+    {
+        double delta = 0;
+        if (move.RouteCount > 0)
+        {
+            delta += MeasureDraft(ref move.A, out _) - _penalized[move.A.Route];
+        }
+
+        if (move.RouteCount > 1)
+        {
+            delta += MeasureDraft(ref move.B, out _) - _penalized[move.B.Route];
+        }
+
+        if (move.Dropped >= 0)
+        {
+            delta += UnservedCost(move.Dropped);
+        }
+
+        if (move.Inserted >= 0)
+        {
+            delta -= UnservedCost(move.Inserted);
+        }
+
+        return delta;
+    }
+
+    /// <summary>Penalized cost of the route a draft describes, and its measures.</summary>
+    public double MeasureDraft(ref RouteDraft draft, out RouteMetrics metrics)
+    {
+        metrics = FastPath ? MeasureBySegments(ref draft) : MeasureByScheduler(ref draft);
+        return CostModel.RoutePenalized(Instance, draft.Route, metrics, _weights);
+    }
+
+    private RouteMetrics MeasureByScheduler(ref RouteDraft draft)
+    {
+        int count = Materialise(ref draft, _scratch);
+        return RouteScheduler.Measure(Instance, draft.Route, _scratch.AsSpan(0, count));
+    }
+
+    private RouteMetrics MeasureBySegments(ref RouteDraft draft)
+    {
+        var travel = Instance.Travel;
+        int vehicle = draft.Route;
+        Segment acc = _depotStart[vehicle];
+        for (int k = 0; k < draft.Count; k++)
+        {
+            ref Piece p = ref draft.Pieces[k];
+            if (p.Route < 0)
+            {
+                Append(ref acc, in _node[p.Stop], travel);
+                continue;
+            }
+
+            int r = p.Route;
+            int len = _length[r];
+            if (!p.Reversed && p.From == 0 && p.To - p.From >= 2)
+            {
+                Append(ref acc, in _prefix[r][p.To], travel);
+            }
+            else if (!p.Reversed && p.To == len - 1 && p.To - p.From >= 2)
+            {
+                Append(ref acc, in _suffix[r][p.From], travel);
+            }
+            else if (!p.Reversed)
+            {
+                var stops = _stops[r];
+                for (int i = p.From; i <= p.To; i++)
+                {
+                    Append(ref acc, in _node[stops[i]], travel);
+                }
+            }
+            else
+            {
+                var stops = _stops[r];
+                for (int i = p.To; i >= p.From; i--)
+                {
+                    Append(ref acc, in _node[stops[i]], travel);
+                }
+            }
+        }
+
+        var m = default(RouteMetrics);
+        m.StopCount = acc.Count;
+        if (acc.Count == 0)
+        {
+            return m;
+        }
+
+        Append(ref acc, in _depotEnd[vehicle], travel);
+        var veh = Instance.Vehicles[vehicle];
+        m.Distance = acc.Distance;
+        m.Duration = acc.Duration;
+        m.TimeWindowViolation = acc.TimeWarp;
+        m.Departure = acc.Earliest;
+        m.Return = acc.Earliest + acc.Duration - acc.TimeWarp;
+        m.Overtime = Math.Max(0, m.Return - veh.ShiftEnd);
+        m.DurationExcess = Math.Max(0, m.Duration - veh.MaxDuration);
+        m.Overload = Overload(vehicle, in acc);
+        m.MissingSkills = System.Numerics.BitOperations.PopCount(acc.Skills & ~veh.Skills);
+        return m;
+    }
+
+    private double Overload(int vehicle, in Segment s)
+    {
+        int dims = Instance.DimensionCount;
+        double over = Math.Max(0, s.Load0 - Instance.Capacity(vehicle, 0));
+        if (dims > 1)
+        {
+            over += Math.Max(0, s.Load1 - Instance.Capacity(vehicle, 1));
+        }
+
+        if (dims > 2)
+        {
+            over += Math.Max(0, s.Load2 - Instance.Capacity(vehicle, 2));
+        }
+
+        if (dims > 3)
+        {
+            over += Math.Max(0, s.Load3 - Instance.Capacity(vehicle, 3));
+        }
+
+        return over;
+    }
+
+    private static void Append(ref Segment acc, in Segment next, Core.Travel.TravelTable travel)
+    {
+        acc = Segment.Concat(in acc, in next, travel.Duration(acc.Last, next.First), travel.Distance(acc.Last, next.First));
+    }
+
+    /// <summary>Writes the draft's stops, in order, into <paramref name="target"/>; returns the count.</summary>
+    private int Materialise(ref RouteDraft draft, int[] target)
+    {
+        int count = 0;
+        for (int k = 0; k < draft.Count; k++)
+        {
+            ref Piece p = ref draft.Pieces[k];
+            if (p.Route < 0)
+            {
+                target[count++] = p.Stop;
+                continue;
+            }
+
+            var stops = _stops[p.Route];
+            if (!p.Reversed)
+            {
+                for (int i = p.From; i <= p.To; i++)
+                {
+                    target[count++] = stops[i];
+                }
+            }
+            else
+            {
+                for (int i = p.To; i >= p.From; i--)
+                {
+                    target[count++] = stops[i];
+                }
+            }
+        }
+
+        return count;
+    }
+
+    public void Apply(ref MoveDraft move)
+    {
+        // Read both drafts before writing either: they may take pieces from each other's routes.
+        int countA = move.RouteCount > 0 ? Materialise(ref move.A, _scratch) : 0;
+        int countB = move.RouteCount > 1 ? Materialise(ref move.B, _scratchB) : 0;
+        if (move.Dropped >= 0)
+        {
+            _routeOf[move.Dropped] = -1;
+            AddUnserved(move.Dropped);
+        }
+
+        if (move.Inserted >= 0)
+        {
+            RemoveUnserved(move.Inserted);
+        }
+
+        if (move.RouteCount > 0)
+        {
+            Store(move.A.Route, _scratch, countA);
+        }
+
+        if (move.RouteCount > 1)
+        {
+            Store(move.B.Route, _scratchB, countB);
+        }
+    }
+
+    private void Store(int route, int[] source, int count)
+    {
+        EnsureCapacity(route, count);
+        Array.Copy(source, _stops[route], count);
+        _length[route] = count;
+        Refresh(route);
+    }
+
+    private void EnsureCapacity(int route, int count)
+    {
+        if (_stops[route].Length < count)
+        {
+            int size = Math.Max(count, _stops[route].Length * 2);
+            Array.Resize(ref _stops[route], size);
+            _prefix[route] = new Segment[size];
+            _suffix[route] = new Segment[size];
+        }
+    }
+
+    /// <summary>Recomputes positions, summaries, measures and costs of one route after it changed.</summary>
+    private void Refresh(int route)
+    {
+        var stops = _stops[route];
+        int len = _length[route];
+        for (int k = 0; k < len; k++)
+        {
+            _routeOf[stops[k]] = route;
+            _posOf[stops[k]] = k;
+        }
+
+        if (FastPath && len > 0)
+        {
+            var travel = Instance.Travel;
+            var prefix = _prefix[route];
+            var suffix = _suffix[route];
+            prefix[0] = _node[stops[0]];
+            for (int k = 1; k < len; k++)
+            {
+                prefix[k] = prefix[k - 1];
+                Append(ref prefix[k], in _node[stops[k]], travel);
+            }
+
+            suffix[len - 1] = _node[stops[len - 1]];
+            for (int k = len - 2; k >= 0; k--)
+            {
+                var head = _node[stops[k]];
+                Append(ref head, in suffix[k + 1], travel);
+                suffix[k] = head;
+            }
+        }
+
+        bool wasFeasible = _feasible[route];
+        var m = RouteScheduler.Measure(Instance, route, stops.AsSpan(0, len));
+        _metrics[route] = m;
+        _objective[route] = CostModel.RouteObjective(Instance, route, m);
+        _penalized[route] = CostModel.RoutePenalized(Instance, route, m, _weights);
+        _feasible[route] = CostModel.RouteFeasible(Instance, m, 1e-7);
+        if (wasFeasible != _feasible[route])
+        {
+            _infeasibleRoutes += _feasible[route] ? -1 : 1;
+        }
+    }
+
+    private void AddUnserved(int stop)
+    {
+        _unservedIndex[stop] = _unservedCount;
+        _unserved[_unservedCount++] = stop;
+        if (!Instance.MayDrop(stop))
+        {
+            _mandatoryUnserved++;
+        }
+    }
+
+    private void RemoveUnserved(int stop)
+    {
+        int idx = _unservedIndex[stop];
+        int last = _unserved[--_unservedCount];
+        _unserved[idx] = last;
+        _unservedIndex[last] = idx;
+        if (!Instance.MayDrop(stop))
+        {
+            _mandatoryUnserved--;
+        }
+    }
+}
