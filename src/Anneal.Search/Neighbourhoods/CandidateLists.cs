@@ -32,32 +32,29 @@ public sealed class CandidateLists
                 }
 
                 double c = Math.Min(Proximity(instance, travel, u, v), Proximity(instance, travel, v, u));
+                int p;
                 if (filled < K)
                 {
-                    int p = filled++;
-                    while (p > 0 && best[p - 1] > c)
-                    {
-                        best[p] = best[p - 1];
-                        who[p] = who[p - 1];
-                        p--;
-                    }
-
-                    best[p] = c;
-                    who[p] = v;
+                    p = filled++;
                 }
                 else if (K > 0 && c < best[K - 1])
                 {
-                    int p = K - 1;
-                    while (p > 0 && best[p - 1] > c)
-                    {
-                        best[p] = best[p - 1];
-                        who[p] = who[p - 1];
-                        p--;
-                    }
-
-                    best[p] = c;
-                    who[p] = v;
+                    p = K - 1;
                 }
+                else
+                {
+                    continue;
+                }
+
+                while (p > 0 && best[p - 1] > c)
+                {
+                    best[p] = best[p - 1];
+                    who[p] = who[p - 1];
+                    p--;
+                }
+
+                best[p] = c;
+                who[p] = v;
             }
 
             Array.Copy(who, 0, _flat, u * K, K);
