@@ -93,7 +93,10 @@ public static class CostModel
         instance.MayDrop(stop) ? 0 : w.Unserved;
 
     /// <summary>True when the measures break no hard rule.</summary>
-    public static bool RouteFeasible(Instance instance, in RouteMetrics m, double tolerance = 1e-9)
+    /// <summary>Violations at or below this are rounding, not breaks.</summary>
+    public const double FeasibilityTolerance = 1e-6;
+
+    public static bool RouteFeasible(Instance instance, in RouteMetrics m, double tolerance = FeasibilityTolerance)
     {
         if (m.StopCount == 0)
         {

@@ -6,7 +6,7 @@ namespace Anneal.Core.Evaluation;
 /// <summary>The one evaluator: schedule, cost breakdown and verdict per hard rule for a whole plan.</summary>
 public static class PlanEvaluator
 {
-    private const double Tolerance = 1e-6;
+    private const double Tolerance = CostModel.FeasibilityTolerance;
 
     public static PlanEvaluation Evaluate(Instance instance, Plan plan)
     {

@@ -34,6 +34,8 @@ public sealed class SearchState
     private readonly int[] _unserved;
     private readonly int[] _unservedIndex;
     private int _unservedCount;
+    private double _totalObjective;
+    private double _totalPenalized;
     private int _infeasibleRoutes;
     private int _mandatoryUnserved;
     private readonly int[] _scratch;
@@ -164,6 +166,12 @@ public sealed class SearchState
         }
     }
 
+    /// <summary>Running total of the objective (kept by every change; re-summed when weights change).</summary>
+    public double CurrentObjective => _totalObjective;
+
+    /// <summary>Running total of the penalized cost.</summary>
+    public double CurrentPenalized => _totalPenalized;
+
     public void SetWeights(in PenaltyWeights weights)
     {
         _weights = weights;
@@ -171,6 +179,74 @@ public sealed class SearchState
         {
             _penalized[r] = CostModel.RoutePenalized(Instance, r, _metrics[r], _weights);
         }
+
+        _totalObjective = Objective();
+        _totalPenalized = Penalized();
+    }
+
+    /// <summary>Would the plan break no hard rule after this move? Uses the measures <see cref="Evaluate"/> computed.</summary>
+    private bool FeasibleAfter(ref MoveDraft move, bool feasibleA, bool feasibleB)
+    {
+        int infeasible = _infeasibleRoutes;
+        if (move.RouteCount > 0)
+        {
+            infeasible += (feasibleA ? 0 : 1) - (_feasible[move.A.Route] ? 0 : 1);
+        }
+
+        if (move.RouteCount > 1)
+        {
+            infeasible += (feasibleB ? 0 : 1) - (_feasible[move.B.Route] ? 0 : 1);
+        }
+
+        int mandatory = _mandatoryUnserved;
+        if (move.Dropped >= 0 && !Instance.MayDrop(move.Dropped))
+        {
+            mandatory++;
+        }
+
+        if (move.Inserted >= 0 && !Instance.MayDrop(move.Inserted))
+        {
+            mandatory--;
+        }
+
+        return infeasible == 0 && mandatory == 0;
+    }
+
+    /// <summary>Full effect of a move: penalized and objective change, and feasibility afterwards.</summary>
+    public MoveEffect Evaluate(ref MoveDraft move)
+    {
+        var effect = default(MoveEffect);
+        bool feasibleA = true, feasibleB = true;
+        if (move.RouteCount > 0)
+        {
+            double p = MeasureDraft(ref move.A, out var m);
+            effect.Penalized += p - _penalized[move.A.Route];
+            effect.Objective += CostModel.RouteObjective(Instance, move.A.Route, m) - _objective[move.A.Route];
+            feasibleA = CostModel.RouteFeasible(Instance, m);
+        }
+
+        if (move.RouteCount > 1)
+        {
+            double p = MeasureDraft(ref move.B, out var m);
+            effect.Penalized += p - _penalized[move.B.Route];
+            effect.Objective += CostModel.RouteObjective(Instance, move.B.Route, m) - _objective[move.B.Route];
+            feasibleB = CostModel.RouteFeasible(Instance, m);
+        }
+
+        if (move.Dropped >= 0)
+        {
+            effect.Penalized += UnservedCost(move.Dropped);
+            effect.Objective += CostModel.UnservedObjective(Instance, move.Dropped);
+        }
+
+        if (move.Inserted >= 0)
+        {
+            effect.Penalized -= UnservedCost(move.Inserted);
+            effect.Objective -= CostModel.UnservedObjective(Instance, move.Inserted);
+        }
+
+        effect.FeasibleAfter = FeasibleAfter(ref move, feasibleA, feasibleB);
+        return effect;
     }
 
     public void Load(Plan plan)
@@ -476,9 +552,13 @@ public sealed class SearchState
         bool wasFeasible = _feasible[route];
         var m = RouteScheduler.Measure(Instance, route, stops.AsSpan(0, len));
         _metrics[route] = m;
+        _totalObjective -= _objective[route];
+        _totalPenalized -= _penalized[route];
         _objective[route] = CostModel.RouteObjective(Instance, route, m);
         _penalized[route] = CostModel.RoutePenalized(Instance, route, m, _weights);
-        _feasible[route] = CostModel.RouteFeasible(Instance, m, 1e-7);
+        _totalObjective += _objective[route];
+        _totalPenalized += _penalized[route];
+        _feasible[route] = CostModel.RouteFeasible(Instance, m);
         if (wasFeasible != _feasible[route])
         {
             _infeasibleRoutes += _feasible[route] ? -1 : 1;
@@ -489,6 +569,8 @@ public sealed class SearchState
     {
         _unservedIndex[stop] = _unservedCount;
         _unserved[_unservedCount++] = stop;
+        _totalObjective += CostModel.UnservedObjective(Instance, stop);
+        _totalPenalized += UnservedCost(stop);
         if (!Instance.MayDrop(stop))
         {
             _mandatoryUnserved++;
@@ -501,6 +583,8 @@ public sealed class SearchState
         int last = _unserved[--_unservedCount];
         _unserved[idx] = last;
         _unservedIndex[last] = idx;
+        _totalObjective -= CostModel.UnservedObjective(Instance, stop);
+        _totalPenalized -= UnservedCost(stop);
         if (!Instance.MayDrop(stop))
         {
             _mandatoryUnserved--;

@@ -43,14 +43,23 @@ public sealed class IncrementalEvaluationTests
                 }
 
                 double before = PlanEvaluator.Penalized(instance, state.ToPlan(), weights);
+                double objectiveBefore = PlanEvaluator.Evaluate(instance, state.ToPlan()).Objective;
                 double delta = state.Delta(ref move);
+                var effect = state.Evaluate(ref move);
                 state.Apply(ref move);
                 var plan = state.ToPlan();
+                var truth = PlanEvaluator.Evaluate(instance, plan);
                 double after = PlanEvaluator.Penalized(instance, plan, weights);
-                Assert.True(Math.Abs(after - before - delta) <= 1e-6 * Math.Max(1, Math.Abs(before)),
+                double tolerance = 1e-6 * Math.Max(1, Math.Abs(before));
+                Assert.True(Math.Abs(after - before - delta) <= tolerance,
                     $"seed {seed} step {step} {move.Kind}: incremental delta {delta}, exact {after - before}");
-                Assert.Equal(PlanEvaluator.Evaluate(instance, plan).Feasible, state.Feasible);
-                Assert.Equal(state.Penalized(), after, 6);
+                Assert.True(Math.Abs(effect.Penalized - delta) <= tolerance, "Evaluate and Delta disagree");
+                Assert.True(Math.Abs(truth.Objective - objectiveBefore - effect.Objective) <= tolerance,
+                    $"seed {seed} step {step} {move.Kind}: objective delta {effect.Objective}, exact {truth.Objective - objectiveBefore}");
+                Assert.Equal(truth.Feasible, effect.FeasibleAfter);
+                Assert.Equal(truth.Feasible, state.Feasible);
+                Assert.True(Math.Abs(state.CurrentPenalized - after) <= tolerance, "running penalized total drifted");
+                Assert.True(Math.Abs(state.CurrentObjective - truth.Objective) <= tolerance, "running objective total drifted");
                 checkedMoves++;
             }
         }
