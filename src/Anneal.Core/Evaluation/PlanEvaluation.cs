@@ -56,6 +56,10 @@ public sealed record PlanEvaluation(
         }
     }
 
+    /// <summary>Ranking of plans: a feasible plan beats an infeasible one, then the lower objective wins.</summary>
+    public bool IsBetterThan(PlanEvaluation other) =>
+        (Feasible && !other.Feasible) || (Feasible == other.Feasible && Objective < other.Objective - 1e-9);
+
     public int VehiclesUsed => Routes.Count(r => r.Stops.Length > 0);
     public double Distance => Routes.Sum(r => r.Metrics.Distance);
     public double Duration => Routes.Sum(r => r.Metrics.Duration);

@@ -166,6 +166,30 @@ public sealed class SearchState
         }
     }
 
+    /// <summary>Total violation per hard rule over all routes (zero where the rule is soft).</summary>
+    public Violations CurrentViolations()
+    {
+        var rules = Instance.Rules;
+        var v = default(Violations);
+        for (int r = 0; r < RouteCount; r++)
+        {
+            if (_feasible[r])
+            {
+                continue;
+            }
+
+            ref readonly var m = ref _metrics[r];
+            v.TimeWindow += rules.TimeWindows.Hard ? m.TimeWindowViolation : 0;
+            v.Capacity += rules.Capacity.Hard ? m.Overload : 0;
+            v.Overtime += rules.ShiftEnd.Hard ? m.Overtime : 0;
+            v.Duration += rules.MaxDuration.Hard ? m.DurationExcess : 0;
+            v.Skill += m.MissingSkills;
+        }
+
+        v.Unserved = _mandatoryUnserved;
+        return v;
+    }
+
     /// <summary>Running total of the objective (kept by every change; re-summed when weights change).</summary>
     public double CurrentObjective => _totalObjective;
 

@@ -63,9 +63,7 @@ public static class RunCoordinator
         int best = 0;
         for (int k = 1; k < judged.Count; k++)
         {
-            var a = judged[k].Evaluation;
-            var b = judged[best].Evaluation;
-            if ((a.Feasible && !b.Feasible) || (a.Feasible == b.Feasible && a.Objective < b.Objective - 1e-9))
+            if (judged[k].Evaluation.IsBetterThan(judged[best].Evaluation))
             {
                 best = k;
             }

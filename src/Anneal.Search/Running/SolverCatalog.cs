@@ -9,6 +9,7 @@ public static class SolverCatalog
     private static readonly Dictionary<string, Func<ISolver>> Factories = new(StringComparer.OrdinalIgnoreCase)
     {
         ["insertion"] = () => new InsertionSolver(),
+        ["sa"] = () => new Annealing.SimulatedAnnealing(),
     };
 
     /// <summary>Register a solver that lives in another assembly (OR-Tools adapters register themselves from the host).</summary>

@@ -1,0 +1,135 @@
+using Anneal.Core.Model;
+using Anneal.Search.Construction;
+using Anneal.Search.Moves;
+using Anneal.Search.Neighbourhoods;
+using Anneal.Search.Representation;
+using Anneal.Search.Running;
+using Anneal.Search.Strategy;
+
+namespace Anneal.Search.Annealing;
+
+/// <summary>
+/// Simulated annealing (Kirkpatrick, Gelatt &amp; Vecchi 1983; for routing Osman 1993, Chiang &amp; Russell 1996)
+/// over the granular neighbourhoods, seeded by cheapest insertion. The start temperature is calibrated from
+/// sampled move deltas; cooling is geometric in the fraction of the budget used, so a 10 s and a 10 min run both
+/// finish cold; on stagnation the search returns to the best plan and reheats; hard-rule prices adapt.
+/// </summary>
+public sealed class SimulatedAnnealing : ISolver
+{
+    private readonly AnnealingSettings _settings;
+
+    public SimulatedAnnealing(AnnealingSettings? settings = null)
+    {
+        _settings = settings ?? new AnnealingSettings();
+    }
+
+    public string Name => "sa";
+
+    public SolverResult Solve(Instance instance, SolveOptions options, IProgress<TracePoint>? progress, CancellationToken cancel)
+    {
+        if (options.Threads > 1)
+        {
+            return ParallelRuns.Run(() => new SimulatedAnnealing(_settings), instance, options, progress, cancel);
+        }
+
+        var budget = new Budget(options, cancel);
+        var trace = new TraceRecorder(progress, options.TimeLimit.TotalSeconds);
+        var candidates = new CandidateLists(instance, _settings.Neighbours);
+        var state = InsertionSolver.Build(instance, candidates, cancel);
+        var rng = new Random(options.Seed);
+        double arc = InitialWeights.TypicalArcCost(instance);
+        var adapter = new PenaltyAdapter(InitialWeights.For(instance, 10), 0.2, arc * 0.01, arc * 1e4);
+        state.SetWeights(adapter.Weights);
+        var keeper = new BestKeeper(state);
+        var sampler = new MoveSampler(state, candidates, rng);
+        trace.Improved(Point(budget, 0, keeper, state, "construction"));
+
+        double startTemperature = Calibrate(state, sampler, _settings.StartAcceptance);
+        double endTemperature = startTemperature * _settings.EndRatio;
+        double temperature = startTemperature;
+        double boost = 0;
+        double lastImprovedAt = 0;
+        var move = default(MoveDraft);
+        long iteration = 0;
+        while (!budget.Exhausted(iteration))
+        {
+            iteration++;
+            if ((iteration & 1023) == 0)
+            {
+                double p = budget.Progress(iteration);
+                boost *= 0.9;
+                temperature = startTemperature * Math.Pow(endTemperature / startTemperature, p) * (1 + boost);
+                if ((iteration & 4095) == 0)
+                {
+                    adapter.Update(state);
+                }
+
+                if (p - lastImprovedAt > _settings.StagnationFraction && p < 0.85)
+                {
+                    keeper.BeforeReset(state);
+                    keeper.Restore(state);
+                    state.SetWeights(adapter.Weights);
+                    boost = _settings.ReheatBoost;
+                    lastImprovedAt = p;
+                }
+
+                long it = iteration;
+                double t = temperature;
+                trace.Sample(budget.Elapsed, () => Point(budget, it, keeper, state, $"T={t:G4}"));
+            }
+
+            if (!sampler.Next(ref move))
+            {
+                continue;
+            }
+
+            var effect = state.Evaluate(ref move);
+            if (effect.Penalized > 0 && rng.NextDouble() >= Math.Exp(-effect.Penalized / temperature))
+            {
+                continue;
+            }
+
+            keeper.BeforeApply(state, effect);
+            state.Apply(ref move);
+            if (keeper.Offer(state))
+            {
+                lastImprovedAt = budget.Progress(iteration);
+                trace.Improved(Point(budget, iteration, keeper, state, $"T={temperature:G4}"));
+            }
+        }
+
+        trace.Finish(Point(budget, iteration, keeper, state, $"T={temperature:G4}"));
+        var plan = keeper.BestPlan(state);
+        return new SolverResult(Name, plan, budget.Elapsed, trace.SecondsToBest, trace.Points, budget.StopReason);
+    }
+
+    private static TracePoint Point(Budget budget, long iteration, BestKeeper keeper, SearchState state, string note) =>
+        new(budget.Elapsed, iteration, keeper.Objective, state.CurrentObjective, keeper.HasFeasible, note);
+
+    /// <summary>Temperature at which the median worsening move of the starting plan is accepted with the given probability.</summary>
+    private static double Calibrate(SearchState state, MoveSampler sampler, double acceptance)
+    {
+        var deltas = new List<double>();
+        var move = default(MoveDraft);
+        for (int k = 0; k < 2000 && deltas.Count < 400; k++)
+        {
+            if (sampler.Next(ref move))
+            {
+                double d = state.Evaluate(ref move).Penalized;
+                if (d > 1e-9 && !double.IsInfinity(d))
+                {
+                    deltas.Add(d);
+                }
+            }
+        }
+
+        if (deltas.Count == 0)
+        {
+            return 1.0;
+        }
+
+        deltas.Sort();
+        double median = deltas[deltas.Count / 2];
+        return median / -Math.Log(acceptance);
+    }
+}

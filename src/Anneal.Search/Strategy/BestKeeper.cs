@@ -1,0 +1,125 @@
+using Anneal.Core.Plans;
+using Anneal.Search.Moves;
+using Anneal.Search.Representation;
+
+namespace Anneal.Search.Strategy;
+
+/// <summary>
+/// Keeps the best plan seen: any feasible plan beats every infeasible one, then the lower objective.
+/// Copies lazily: while the current state is the best, the copy is made only before a move that might lose it.
+/// </summary>
+public sealed class BestKeeper
+{
+    private readonly int[] _lengths;
+    private readonly int[][] _stops;
+    private bool _pending;
+    private bool _hasSnapshot;
+
+    public BestKeeper(SearchState state)
+    {
+        _lengths = new int[state.RouteCount];
+        _stops = new int[state.RouteCount][];
+        for (int r = 0; r < _stops.Length; r++)
+        {
+            _stops[r] = new int[8];
+        }
+
+        Offer(state);
+    }
+
+    public bool HasFeasible { get; private set; }
+
+    /// <summary>Objective of the best plan (feasible if any was found).</summary>
+    public double Objective { get; private set; } = double.PositiveInfinity;
+
+    private double _bestInfeasible = double.PositiveInfinity;
+
+    /// <summary>Call after every applied move; returns true when the state became the new best.</summary>
+    public bool Offer(SearchState state)
+    {
+        if (state.Feasible)
+        {
+            double obj = state.CurrentObjective;
+            if (!HasFeasible || obj < Objective - 1e-9)
+            {
+                HasFeasible = true;
+                Objective = obj;
+                _pending = true;
+                return true;
+            }
+        }
+        else if (!HasFeasible && state.CurrentPenalized < _bestInfeasible - 1e-9)
+        {
+            _bestInfeasible = state.CurrentPenalized;
+            Objective = state.CurrentObjective;
+            _pending = true;
+            return true;
+        }
+
+        return false;
+    }
+
+    /// <summary>Call before applying a move: snapshots the best unless the move is certain to improve on it.</summary>
+    public void BeforeApply(SearchState state, in MoveEffect effect)
+    {
+        if (!_pending)
+        {
+            return;
+        }
+
+        bool certainlyBetter = HasFeasible
+            ? effect.FeasibleAfter && effect.Objective < -1e-9
+            : effect.FeasibleAfter || effect.Penalized < -1e-9;
+        if (!certainlyBetter)
+        {
+            Snapshot(state);
+        }
+    }
+
+    /// <summary>Call before changing the state other than by a move (restart, weight change does not count).</summary>
+    public void BeforeReset(SearchState state)
+    {
+        if (_pending)
+        {
+            Snapshot(state);
+        }
+    }
+
+    private void Snapshot(SearchState state)
+    {
+        state.CopyTo(_lengths, _stops);
+        _pending = false;
+        _hasSnapshot = true;
+    }
+
+    public Plan BestPlan(SearchState state)
+    {
+        if (_pending || !_hasSnapshot)
+        {
+            return state.ToPlan();
+        }
+
+        var routes = new List<PlannedRoute>();
+        for (int r = 0; r < _lengths.Length; r++)
+        {
+            if (_lengths[r] > 0)
+            {
+                routes.Add(new PlannedRoute(r, _stops[r].AsSpan(0, _lengths[r]).ToArray()));
+            }
+        }
+
+        return new Plan(routes);
+    }
+
+    /// <summary>Puts the best plan back into the state (restart from the best).</summary>
+    public void Restore(SearchState state)
+    {
+        if (_pending)
+        {
+            return;
+        }
+
+        state.Load(BestPlan(state));
+        _pending = true;
+    }
+}

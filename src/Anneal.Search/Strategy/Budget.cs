@@ -1,0 +1,54 @@
+using System.Diagnostics;
+using Anneal.Search.Running;
+
+namespace Anneal.Search.Strategy;
+
+/// <summary>
+/// When a run must stop, and how far through its budget it is. With an iteration limit, progress is counted in
+/// iterations, so cooling and every other schedule depend only on the seed: the run is reproducible.
+/// </summary>
+public sealed class Budget
+{
+    private readonly Stopwatch _clock = Stopwatch.StartNew();
+    private readonly double _seconds;
+    private readonly long _iterations;
+    private readonly CancellationToken _cancel;
+    private bool _timeUp;
+
+    public Budget(SolveOptions options, CancellationToken cancel)
+    {
+        _seconds = Math.Max(0.001, options.TimeLimit.TotalSeconds);
+        _iterations = options.IterationLimit ?? long.MaxValue;
+        _cancel = cancel;
+    }
+
+    public double Elapsed => _clock.Elapsed.TotalSeconds;
+
+    public bool IterationBound => _iterations != long.MaxValue;
+
+    public bool Cancelled => _cancel.IsCancellationRequested;
+
+    public bool TimeUp => _timeUp;
+
+    /// <summary>True once any limit is reached. Reads the clock only every 64 iterations.</summary>
+    public bool Exhausted(long iteration)
+    {
+        if (iteration >= _iterations)
+        {
+            return true;
+        }
+
+        if ((iteration & 63) == 0)
+        {
+            _timeUp = _timeUp || _clock.Elapsed.TotalSeconds >= _seconds || _cancel.IsCancellationRequested;
+        }
+
+        return _timeUp;
+    }
+
+    /// <summary>Fraction of the budget used, 0 to 1: iterations when they bound the run, else wall-clock time.</summary>
+    public double Progress(long iteration) =>
+        IterationBound ? Math.Min(1.0, (double)iteration / _iterations) : Math.Min(1.0, Elapsed / _seconds);
+
+    public string StopReason => Cancelled ? "interrupted" : "completed";
+}
