@@ -1,0 +1,30 @@
+namespace Anneal.Formats.Input.Text;
+
+/// <summary>Collects the problems of one file so a reader can report every bad row at once.</summary>
+internal sealed class ProblemLog(string file)
+{
+    /// <summary>Enough to fix a file in one pass without burying the first problems.</summary>
+    private const int MaxProblems = 200;
+
+    private readonly List<InputProblem> _problems = [];
+
+    public string File { get; } = file;
+
+    public int Count => _problems.Count;
+
+    public void Add(int? row, string? column, string? value, string problem, string fix)
+    {
+        if (_problems.Count < MaxProblems)
+        {
+            _problems.Add(new InputProblem(File, row, column, value, problem, fix));
+        }
+    }
+
+    public void ThrowIfAny()
+    {
+        if (_problems.Count > 0)
+        {
+            throw new InputException(_problems.ToArray());
+        }
+    }
+}
