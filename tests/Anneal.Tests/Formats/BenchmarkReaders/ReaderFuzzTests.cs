@@ -20,20 +20,17 @@ public class ReaderFuzzTests
     private const string RouteSeed = "4a3dFhhvcWPm";
 
     [Fact]
-    public void Damaged_solomon_text_reads_or_fails_cleanly() =>
-        TextMutation.Several.Sample(m =>
-        {
-            string text = TextMutation.Apply(SampleTexts.Solomon, m);
-            ReadOrFail(text, "fuzz.txt", () => CheckInstance(SolomonReader.Parse(text, "fuzz.txt")));
-        }, seed: SolomonSeed, iter: Iterations, threads: 1);
+    public void Damaged_solomon_text_reads_or_fails_cleanly() => InstanceProperty(SampleTexts.Solomon, "fuzz.txt", SolomonSeed, SolomonReader.Parse);
 
     [Fact]
-    public void Damaged_cvrplib_text_reads_or_fails_cleanly() =>
+    public void Damaged_cvrplib_text_reads_or_fails_cleanly() => InstanceProperty(SampleTexts.Cvrplib, "fuzz.vrp", CvrplibSeed, CvrplibReader.Parse);
+
+    private static void InstanceProperty(string sample, string file, string seed, Func<string, string, Instance> parse) =>
         TextMutation.Several.Sample(m =>
         {
-            string text = TextMutation.Apply(SampleTexts.Cvrplib, m);
-            ReadOrFail(text, "fuzz.vrp", () => CheckInstance(CvrplibReader.Parse(text, "fuzz.vrp")));
-        }, seed: CvrplibSeed, iter: Iterations, threads: 1);
+            string text = TextMutation.Apply(sample, m);
+            ReadOrFail(text, file, () => CheckInstance(parse(text, file)));
+        }, seed: seed, iter: Iterations, threads: 1);
 
     [Fact]
     public void Damaged_route_files_read_or_fail_with_a_row()
