@@ -27,7 +27,7 @@ internal static class Numbers
     public static bool TryWhole(string token, out long value)
     {
         value = 0;
-        if (long.TryParse(token, NumberStyles.Integer, CultureInfo.InvariantCulture, out long v) && Math.Abs(v) <= (long)Limit)
+        if (long.TryParse(token, NumberStyles.Integer, CultureInfo.InvariantCulture, out long v) && v >= -(long)Limit && v <= (long)Limit)
         {
             value = v;
             return true;
