@@ -33,12 +33,14 @@ internal static class StopsTable
             }
 
             var (x, y) = Coordinates.Read(cells, system);
-            var demand = new double[demandColumn.Length];
-            for (int d = 0; d < demand.Length; d++)
+            var demand = new double[dimensions?.Count ?? 0];
+            foreach (var (column, d) in demandColumn)
             {
-                if (demandColumn[d] is { } column)
+                // Unmatched columns are still checked, so every bad cell is reported in one pass.
+                double value = cells.Number(column, 0, true, "the demand");
+                if (d >= 0)
                 {
-                    demand[d] = cells.Number(column, 0, true, "the demand in " + dimensions![d]);
+                    demand[d] = value;
                 }
             }
 
@@ -55,7 +57,6 @@ internal static class StopsTable
                 needs |= skills.Bit(skill, cells, "skills");
             }
 
-            double penalty = cells.Number("penalty", double.NaN, true, "the price of leaving the stop unserved");
             stops.Add(new Stop
             {
                 Id = id,
@@ -66,7 +67,7 @@ internal static class StopsTable
                 Windows = WindowText.Read(cells, "windows"),
                 RequiredSkills = needs,
                 Optional = cells.Flag("optional"),
-                UnservedPenalty = cells.Text("penalty").Length == 0 ? double.NaN : penalty,
+                UnservedPenalty = cells.Text("penalty").Length == 0 ? double.NaN : cells.Number("penalty", double.NaN, true, "the price of leaving the stop unserved"),
             });
         }
 
@@ -78,10 +79,10 @@ internal static class StopsTable
         return (stops, ids, system);
     }
 
-    /// <summary>The demand column for each dimension (null when the stop file has none: demand 0).</summary>
-    private static string?[] DemandColumns(CsvTable table, IReadOnlyList<string> dimensions, bool check, ProblemList problems)
+    /// <summary>Each demand column with its dimension index (-1 when vehicles.csv has no such capacity).</summary>
+    private static List<(string Column, int Dimension)> DemandColumns(CsvTable table, IReadOnlyList<string> dimensions, bool check, ProblemList problems)
     {
-        var columns = new string?[dimensions.Count];
+        var columns = new List<(string, int)>();
         foreach (var (index, name) in HeaderCheck.Family(table, DemandPrefix))
         {
             int d = -1;
@@ -93,11 +94,8 @@ internal static class StopsTable
                 }
             }
 
-            if (d >= 0)
-            {
-                columns[d] = table.Header[index];
-            }
-            else if (check)
+            columns.Add((table.Header[index], d));
+            if (d < 0 && check)
             {
                 var near = Closest.Find(name, dimensions);
                 problems.Add(table.File, 1, table.Header[index], null, $"no vehicle capacity for dimension '{name}' (vehicles.csv has no capacity_{name} column)",
