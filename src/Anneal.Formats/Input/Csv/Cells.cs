@@ -76,7 +76,15 @@ internal readonly struct Cells(CsvTable table, CsvRow row, ProblemList problems)
         return value;
     }
 
-    public double Time(string column, double fallback)
+    public double Time(string column, double fallback) => Clock(column, fallback, TimeText.TryParseTime, "not a valid time",
+        "write HH:MM with HH from 0 to 47 and MM from 00 to 59 (e.g. 07:30), or minutes since midnight");
+
+    public double Duration(string column, double fallback) => Clock(column, fallback, TimeText.TryParseDuration, "not a valid duration",
+        "write H:MM with MM from 00 to 59 (e.g. 0:15), or a number of minutes");
+
+    private delegate bool ClockParser(string text, out double minutes);
+
+    private double Clock(string column, double fallback, ClockParser parse, string problem, string fix)
     {
         var text = Text(column);
         if (text.Length == 0)
@@ -84,26 +92,9 @@ internal readonly struct Cells(CsvTable table, CsvRow row, ProblemList problems)
             return fallback;
         }
 
-        if (!TimeText.TryParseTime(text, out double t))
+        if (!parse(text, out double t))
         {
-            Report(column, text, "not a valid time", "write HH:MM with HH from 0 to 47 and MM from 00 to 59 (e.g. 07:30), or minutes since midnight");
-            return fallback;
-        }
-
-        return t;
-    }
-
-    public double Duration(string column, double fallback)
-    {
-        var text = Text(column);
-        if (text.Length == 0)
-        {
-            return fallback;
-        }
-
-        if (!TimeText.TryParseDuration(text, out double t))
-        {
-            Report(column, text, "not a valid duration", "write H:MM with MM from 00 to 59 (e.g. 0:15), or a number of minutes");
+            Report(column, text, problem, fix);
             return fallback;
         }
 
