@@ -1,0 +1,36 @@
+namespace Anneal.Formats.Input.Csv;
+
+/// <summary>Collects every problem found while reading a job, so the user sees them all at once.</summary>
+internal sealed class ProblemList
+{
+    private readonly List<InputProblem> _problems = [];
+
+    public int Count => _problems.Count;
+
+    public IReadOnlyList<InputProblem> All => _problems;
+
+    public void Add(string file, int? row, string? column, string? value, string problem, string fix) =>
+        _problems.Add(new InputProblem(file, row, column, value, problem, fix));
+
+    /// <summary>Reports at most <paramref name="shown"/> items one by one, then one line counting the rest.</summary>
+    public void AddCapped<T>(IReadOnlyList<T> items, int shown, Action<T> add, Action<int> addRest)
+    {
+        for (int i = 0; i < items.Count && i < shown; i++)
+        {
+            add(items[i]);
+        }
+
+        if (items.Count > shown)
+        {
+            addRest(items.Count - shown);
+        }
+    }
+
+    public void ThrowIfAny()
+    {
+        if (_problems.Count > 0)
+        {
+            throw new InputException(_problems.ToArray());
+        }
+    }
+}

@@ -1,0 +1,290 @@
+using System.Text.Json;
+using Anneal.Core.Model;
+
+namespace Anneal.Formats.Input.Csv;
+
+/// <summary>settings.json: objective, search budget, solvers, seed, travel speed and hard/soft rules.</summary>
+internal sealed record SettingsFile
+{
+    public const string FileName = "settings.json";
+
+    public const double DefaultSpeedKmh = 40;
+    public const double DefaultDetour = 1.3;
+
+    public JobSettings Job { get; init; } = new();
+    public Objective Objective { get; init; } = Objective.Cost;
+    public RuleSet Rules { get; init; } = RuleSet.AllHard;
+    public double SpeedKmh { get; init; } = DefaultSpeedKmh;
+    public double DetourFactor { get; init; } = DefaultDetour;
+
+    private static readonly string[] TopKeys = ["objective", "timeSeconds", "solvers", "seed", "travel", "rules"];
+    private static readonly string[] TravelKeys = ["speedKmh", "detourFactor"];
+    private static readonly (string Name, string PriceKey)[] RuleKeys =
+        [("timeWindows", "pricePerMinute"), ("capacity", "pricePerUnit"), ("shiftEnd", "pricePerMinute"), ("maxDuration", "pricePerMinute"), ("unserved", "pricePerStop")];
+
+    public static SettingsFile Read(byte[] bytes, ProblemList problems)
+    {
+        var span = bytes.AsSpan();
+        if (span.StartsWith((ReadOnlySpan<byte>)[0xEF, 0xBB, 0xBF]))
+        {
+            span = span[3..];
+        }
+
+        JsonTree root;
+        try
+        {
+            root = JsonTree.Parse(span);
+        }
+        catch (Exception e) when (e is JsonException or InvalidOperationException or FormatException)
+        {
+            int? line = e is JsonException j && j.LineNumber is long l ? (int)l + 1 : null;
+            problems.Add(FileName, line, null, null, "not valid JSON: " + Clean(e.Message), "fix the JSON syntax near this line (comments and trailing commas are allowed)");
+            return new SettingsFile();
+        }
+
+        if (!root.IsObject)
+        {
+            problems.Add(FileName, root.Line, null, root.Shown, "the settings must be one JSON object", "wrap the settings in { ... }");
+            return new SettingsFile();
+        }
+
+        var reader = new SettingsReader(problems);
+        return reader.Top(root);
+    }
+
+    private static string Clean(string message)
+    {
+        int cut = message.IndexOf(" Path:", StringComparison.Ordinal);
+        return cut > 0 ? message[..cut] : message;
+    }
+
+    private sealed class SettingsReader(ProblemList problems)
+    {
+        public SettingsFile Top(JsonTree root)
+        {
+            var job = new JobSettings();
+            var result = new SettingsFile();
+            foreach (var (key, line, value) in Members(root, TopKeys, string.Empty))
+            {
+                switch (key)
+                {
+                    case "objective":
+                        if (value.Kind != JsonTokenType.String || !ObjectiveNames.TryParse(value.Text, out var objective))
+                        {
+                            Add(line, key, value.Shown, "unknown objective", "use one of " + ObjectiveNames.Accepted);
+                            break;
+                        }
+
+                        job = job with { Objective = objective };
+                        result = result with { Objective = objective };
+                        break;
+                    case "timeSeconds":
+                        if (Positive(value, line, key, "the search time budget in seconds") is double seconds)
+                        {
+                            job = job with { TimeSeconds = seconds };
+                        }
+
+                        break;
+                    case "solvers":
+                        job = job with { Solvers = Solvers(value, line) };
+                        break;
+                    case "seed":
+                        if (value.Kind != JsonTokenType.Number || value.Number != Math.Floor(value.Number) || value.Number is < int.MinValue or > int.MaxValue)
+                        {
+                            Add(line, key, value.Shown, "not a whole number", "give the random seed as a whole number, e.g. 1");
+                            break;
+                        }
+
+                        job = job with { Seed = (int)value.Number };
+                        break;
+                    case "travel":
+                        result = Travel(value, line, result);
+                        break;
+                    case "rules":
+                        result = result with { Rules = Rules(value, line) };
+                        break;
+                }
+            }
+
+            return result with { Job = job };
+        }
+
+        private SettingsFile Travel(JsonTree travel, int line, SettingsFile result)
+        {
+            if (!Object(travel, line, "travel"))
+            {
+                return result;
+            }
+
+            foreach (var (key, keyLine, value) in Members(travel, TravelKeys, "travel."))
+            {
+                double? v = Positive(value, keyLine, "travel." + key, key == "speedKmh" ? "the average speed in km/h" : "the ratio of road to straight-line distance");
+                if (v is double d)
+                {
+                    result = key == "speedKmh" ? result with { SpeedKmh = d } : result with { DetourFactor = d };
+                }
+            }
+
+            return result;
+        }
+
+        private RuleSet Rules(JsonTree rules, int line)
+        {
+            var set = RuleSet.AllHard;
+            if (!Object(rules, line, "rules"))
+            {
+                return set;
+            }
+
+            var names = new string[RuleKeys.Length];
+            for (int i = 0; i < names.Length; i++)
+            {
+                names[i] = RuleKeys[i].Name;
+            }
+
+            foreach (var (key, keyLine, value) in Members(rules, names, "rules."))
+            {
+                int r = Array.IndexOf(names, key);
+                var rule = OneRule(value, keyLine, key, RuleKeys[r].PriceKey);
+                set = r switch
+                {
+                    0 => set with { TimeWindows = rule },
+                    1 => set with { Capacity = rule },
+                    2 => set with { ShiftEnd = rule },
+                    3 => set with { MaxDuration = rule },
+                    _ => set with { Unserved = rule },
+                };
+            }
+
+            return set;
+        }
+
+        private Rule OneRule(JsonTree value, int line, string name, string priceKey)
+        {
+            if (!Object(value, line, "rules." + name))
+            {
+                return Rule.HardRule;
+            }
+
+            bool hard = true;
+            double price = 0;
+            int priceLine = line;
+            foreach (var (key, keyLine, v) in Members(value, ["hard", priceKey], $"rules.{name}."))
+            {
+                if (key == "hard")
+                {
+                    if (v.Kind is not (JsonTokenType.True or JsonTokenType.False))
+                    {
+                        Add(keyLine, $"rules.{name}.hard", v.Shown, "not true or false", "write true (never broken) or false (broken at a price)");
+                        continue;
+                    }
+
+                    hard = v.Kind == JsonTokenType.True;
+                }
+                else if (v.Kind != JsonTokenType.Number || !double.IsFinite(v.Number))
+                {
+                    Add(keyLine, $"rules.{name}.{priceKey}", v.Shown, "not a number", "give the price as a number, e.g. 2.5");
+                }
+                else
+                {
+                    price = v.Number;
+                    priceLine = keyLine;
+                }
+            }
+
+            if (!hard && price <= 0)
+            {
+                Add(priceLine, $"rules.{name}.{priceKey}", price.ToString(System.Globalization.CultureInfo.InvariantCulture),
+                    "a soft rule needs a positive price", $"give {priceKey} > 0, or make the rule hard");
+                return Rule.HardRule;
+            }
+
+            return hard ? Rule.HardRule : Rule.Soft(price);
+        }
+
+        private List<string>? Solvers(JsonTree value, int line)
+        {
+            var list = new List<string>();
+            if (value.Kind == JsonTokenType.StartArray)
+            {
+                foreach (var item in value.Items)
+                {
+                    if (item.Kind == JsonTokenType.String && !string.IsNullOrWhiteSpace(item.Text))
+                    {
+                        list.Add(item.Text.Trim());
+                    }
+                    else
+                    {
+                        Add(item.Line, "solvers", item.Shown, "not a solver name", "list solver names as strings, e.g. [\"sa\", \"tabu\"]");
+                    }
+                }
+
+                return list;
+            }
+
+            Add(line, "solvers", value.Shown, "not a list of solver names", "write e.g. \"solvers\": [\"sa\", \"tabu\"]");
+            return null;
+        }
+
+        private double? Positive(JsonTree value, int line, string key, string meaning)
+        {
+            if (value.Kind != JsonTokenType.Number || !double.IsFinite(value.Number) || value.Number <= 0)
+            {
+                Add(line, key, value.Shown, "not a positive number", $"give {meaning} as a number above zero");
+                return null;
+            }
+
+            return value.Number;
+        }
+
+        private bool Object(JsonTree value, int line, string key)
+        {
+            if (value.IsObject)
+            {
+                return true;
+            }
+
+            Add(line, key, value.Shown, "not a JSON object", "write it as { ... } with its keys inside");
+            return false;
+        }
+
+        /// <summary>Known members of <paramref name="obj"/>; unknown and repeated keys are reported and skipped.</summary>
+        private List<(string Key, int Line, JsonTree Value)> Members(JsonTree obj, IReadOnlyList<string> known, string path)
+        {
+            var result = new List<(string, int, JsonTree)>();
+            var seen = new HashSet<string>(StringComparer.Ordinal);
+            foreach (var (rawKey, line, value) in obj.Members)
+            {
+                string? key = null;
+                foreach (var k in known)
+                {
+                    if (string.Equals(k, rawKey, StringComparison.OrdinalIgnoreCase))
+                    {
+                        key = k;
+                    }
+                }
+
+                if (key is null)
+                {
+                    var near = Closest.Find(rawKey, known);
+                    Add(line, path + rawKey, null, "unknown settings key",
+                        (near is not null ? $"did you mean '{near}'? " : string.Empty) + "accepted keys here: " + string.Join(", ", known));
+                    continue;
+                }
+
+                if (!seen.Add(key))
+                {
+                    Add(line, path + rawKey, null, "the key appears twice", "keep one of them");
+                    continue;
+                }
+
+                result.Add((key, line, value));
+            }
+
+            return result;
+        }
+
+        private void Add(int line, string key, string? value, string problem, string fix) =>
+            problems.Add(FileName, line, key, value, problem, fix);
+    }
+}

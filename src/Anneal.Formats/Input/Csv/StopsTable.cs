@@ -1,0 +1,108 @@
+using Anneal.Core.Model;
+
+namespace Anneal.Formats.Input.Csv;
+
+/// <summary>stops.csv: the places to serve, their demand per dimension, windows, skills and whether they may be skipped.</summary>
+internal static class StopsTable
+{
+    public const string FileName = "stops.csv";
+
+    private const string DemandPrefix = "demand_";
+
+    private static readonly string[] Known = ["id", .. Coordinates.Columns, "service", "windows", "skills", "optional", "penalty"];
+
+    /// <param name="dimensions">The job's dimensions from vehicles.csv; null when vehicles.csv could not be read.</param>
+    /// <param name="vehicleSkills">Skills some vehicle offers; null when vehicles.csv could not be read.</param>
+    public static (List<Stop> Stops, IdRegistry Ids, CoordinateSystem System) Read(
+        CsvTable table, IReadOnlyList<string>? dimensions, IReadOnlySet<string>? vehicleSkills, SkillIndex skills, ProblemList problems)
+    {
+        HeaderCheck.Check(table, Known, [DemandPrefix], problems);
+        bool hasId = HeaderCheck.Require(table, "id", "a unique name per stop", problems);
+        var system = Coordinates.Detect(table, problems);
+        var demandColumn = DemandColumns(table, dimensions ?? [], dimensions is not null, problems);
+
+        var stops = new List<Stop>();
+        var ids = new IdRegistry();
+        foreach (var row in table.Rows)
+        {
+            var cells = new Cells(table, row, problems);
+            var id = cells.Required("id", "a unique stop id") ?? $"(row {row.Line})";
+            if (hasId)
+            {
+                ids.Add(id, stops.Count, cells, "stop");
+            }
+
+            var (x, y) = Coordinates.Read(cells, system);
+            var demand = new double[dimensions?.Count ?? 0];
+            foreach (var (column, d) in demandColumn)
+            {
+                // Unmatched columns are still checked, so every bad cell is reported in one pass.
+                double value = cells.Number(column, 0, true, "the demand");
+                if (d >= 0)
+                {
+                    demand[d] = value;
+                }
+            }
+
+            ulong needs = 0;
+            foreach (var skill in cells.List("skills"))
+            {
+                if (vehicleSkills is not null && !vehicleSkills.Contains(skill))
+                {
+                    var near = Closest.Find(skill, vehicleSkills);
+                    cells.Report("skills", skill, "no vehicle offers this skill",
+                        near is not null ? $"did you mean '{near}'? Or add it to a vehicle's skills in vehicles.csv" : "add it to a vehicle's skills in vehicles.csv, or remove it from the stop");
+                }
+
+                needs |= skills.Bit(skill, cells, "skills");
+            }
+
+            stops.Add(new Stop
+            {
+                Id = id,
+                X = x,
+                Y = y,
+                Demand = demand,
+                ServiceTime = cells.Duration("service", 0),
+                Windows = WindowText.Read(cells, "windows"),
+                RequiredSkills = needs,
+                Optional = cells.Flag("optional"),
+                UnservedPenalty = cells.Text("penalty").Length == 0 ? double.NaN : cells.Number("penalty", double.NaN, true, "the price of leaving the stop unserved"),
+            });
+        }
+
+        if (table.Rows.Count == 0)
+        {
+            problems.Add(table.File, null, null, null, "no stops", "add at least one stop line under the header");
+        }
+
+        return (stops, ids, system);
+    }
+
+    /// <summary>Each demand column with its dimension index (-1 when vehicles.csv has no such capacity).</summary>
+    private static List<(string Column, int Dimension)> DemandColumns(CsvTable table, IReadOnlyList<string> dimensions, bool check, ProblemList problems)
+    {
+        var columns = new List<(string, int)>();
+        foreach (var (index, name) in HeaderCheck.Family(table, DemandPrefix))
+        {
+            int d = -1;
+            for (int k = 0; k < dimensions.Count; k++)
+            {
+                if (string.Equals(dimensions[k], name, StringComparison.OrdinalIgnoreCase))
+                {
+                    d = k;
+                }
+            }
+
+            columns.Add((table.Header[index], d));
+            if (d < 0 && check)
+            {
+                var near = Closest.Find(name, dimensions);
+                problems.Add(table.File, 1, table.Header[index], null, $"no vehicle capacity for dimension '{name}' (vehicles.csv has no capacity_{name} column)",
+                    near is not null ? $"did you mean demand_{near}? Or add capacity_{name} to vehicles.csv" : $"add a capacity_{name} column to vehicles.csv");
+            }
+        }
+
+        return columns;
+    }
+}
