@@ -106,7 +106,10 @@ public sealed class SimulatedAnnealing : ISolver
     private static TracePoint Point(Budget budget, long iteration, BestKeeper keeper, SearchState state, string note) =>
         new(budget.Elapsed, iteration, keeper.Objective, state.CurrentObjective, keeper.HasFeasible, note);
 
-    /// <summary>Temperature at which the median worsening move of the starting plan is accepted with the given probability.</summary>
+    /// <summary>
+    /// Temperature at which the median worsening move of the starting plan is accepted with the given probability.
+    /// Measured on the objective alone: violation prices are the adapter's business, not the temperature's.
+    /// </summary>
     private static double Calibrate(SearchState state, MoveSampler sampler, double acceptance)
     {
         var deltas = new List<double>();
@@ -115,7 +118,7 @@ public sealed class SimulatedAnnealing : ISolver
         {
             if (sampler.Next(ref move))
             {
-                double d = state.Evaluate(ref move).Penalized;
+                double d = state.Evaluate(ref move).Objective;
                 if (d > 1e-9 && !double.IsInfinity(d))
                 {
                     deltas.Add(d);
