@@ -1,7 +1,6 @@
 using System.Globalization;
 using Anneal.Core.Evaluation;
 using Anneal.Core.Model;
-using CsvHelper;
 
 namespace Anneal.Formats.Output;
 
@@ -15,7 +14,7 @@ public static class RoutesCsvWriter
 
     public static void Write(TextWriter writer, Instance instance, PlanEvaluation evaluation)
     {
-        using var csv = new CsvWriter(writer, CultureInfo.InvariantCulture, leaveOpen: true);
+        using var csv = CsvOutput.Open(writer);
         foreach (var name in new[] { "vehicle", "sequence", "stop", "arrival", "start", "departure", "wait", "late", "window" })
         {
             csv.WriteField(name);

@@ -1,5 +1,4 @@
 using System.Globalization;
-using CsvHelper;
 
 namespace Anneal.Formats.Output;
 
@@ -13,7 +12,7 @@ public static class TraceCsvWriter
 
     public static void Write(TextWriter writer, IEnumerable<TraceRow> rows)
     {
-        using var csv = new CsvWriter(writer, CultureInfo.InvariantCulture, leaveOpen: true);
+        using var csv = CsvOutput.Open(writer);
         foreach (var name in new[] { "solver", "seconds", "iteration", "best_objective", "current_objective", "best_feasible", "state" })
         {
             csv.WriteField(name);
