@@ -3,22 +3,14 @@ using Anneal.Formats.Input;
 
 namespace Anneal.Tests.Cli;
 
-public sealed class CliAppTests : IDisposable
+public sealed class CliAppTests : CommandTest
 {
-    private readonly string _dir = Directory.CreateTempSubdirectory("anneal-cli-").FullName;
-    private readonly StringWriter _out = new();
-    private readonly StringWriter _err = new();
-
-    public void Dispose() => Directory.Delete(_dir, recursive: true);
-
-    private int Run(params string[] args) => CliApp.Run(args, _out, _err);
-
-    private string All => _out.ToString() + _err.ToString();
+    private int Run(params string[] args) => CliApp.Run(args, Out, Err);
 
     [Fact]
     public void Check_on_a_missing_path_exits_2_and_names_it()
     {
-        string missing = Path.Combine(_dir, "no-such-job");
+        string missing = Path.Combine(Dir, "no-such-job");
 
         Assert.Equal(ExitCodes.InvalidInput, Run("check", missing));
         Assert.Contains(missing, All, StringComparison.Ordinal);
@@ -28,10 +20,10 @@ public sealed class CliAppTests : IDisposable
     [Fact]
     public void Solve_on_a_missing_path_exits_2_without_a_stack_trace()
     {
-        string missing = Path.Combine(_dir, "nothing.txt");
+        string missing = Path.Combine(Dir, "nothing.txt");
 
-        Assert.Equal(ExitCodes.InvalidInput, Run("solve", missing, "--out", Path.Combine(_dir, "out")));
-        Assert.Contains(missing, _err.ToString(), StringComparison.Ordinal);
+        Assert.Equal(ExitCodes.InvalidInput, Run("solve", missing, "--out", Path.Combine(Dir, "out")));
+        Assert.Contains(missing, Err.ToString(), StringComparison.Ordinal);
         Assert.DoesNotContain("   at ", All, StringComparison.Ordinal);
     }
 
@@ -41,10 +33,10 @@ public sealed class CliAppTests : IDisposable
     [InlineData("evaluate", "x")]
     [InlineData("frobnicate")]
     [InlineData]
-    public void Usage_errors_exit_2(params string[] args)
+    public void UsageErrors_exit_2(params string[] args)
     {
         Assert.Equal(ExitCodes.InvalidInput, Run(args));
-        Assert.Contains("--help", _err.ToString(), StringComparison.Ordinal);
+        Assert.Contains("--help", Err.ToString(), StringComparison.Ordinal);
     }
 
     [Theory]
@@ -55,25 +47,25 @@ public sealed class CliAppTests : IDisposable
     public void Every_command_has_help(params string[] args)
     {
         Assert.Equal(ExitCodes.Success, Run(args));
-        Assert.Contains("Usage:", _out.ToString(), StringComparison.Ordinal);
+        Assert.Contains("Usage:", Out.ToString(), StringComparison.Ordinal);
     }
 
     [Fact]
     public void Version_prints_a_version_number()
     {
         Assert.Equal(ExitCodes.Success, Run("--version"));
-        Assert.Matches(@"^\d+\.\d+\.\d+", _out.ToString());
+        Assert.Matches(@"^\d+\.\d+\.\d+", Out.ToString());
     }
 
     [Fact]
     public void Bad_time_budget_exits_2_before_reading_anything()
     {
         Assert.Equal(ExitCodes.InvalidInput, Run("solve", "x", "--time", "0"));
-        Assert.Contains("--time", _err.ToString(), StringComparison.Ordinal);
+        Assert.Contains("--time", Err.ToString(), StringComparison.Ordinal);
     }
 
     [SkippableFact]
-    public void Solve_on_a_small_Solomon_file_writes_the_three_outputs()
+    public void Solve_on_a_small_Solomon_file_writes_the_threeOutputs()
     {
         // Five customers in Solomon's layout (Solomon 1987; the column order of the published files); wide windows,
         // small demands, so any sensible plan is feasible.
@@ -95,9 +87,9 @@ public sealed class CliAppTests : IDisposable
                 5      35         35         20          0        900         10
             """;
         Skip.IfNot(SolomonReader.LooksLike(text), "the Solomon reader is still a stub in this tree");
-        string file = Path.Combine(_dir, "tiny5.txt");
+        string file = Path.Combine(Dir, "tiny5.txt");
         File.WriteAllText(file, text);
-        string outDir = Path.Combine(_dir, "run");
+        string outDir = Path.Combine(Dir, "run");
 
         Assert.Equal(ExitCodes.Success, Run("check", file));
         int code = Run("solve", file, "--solvers", "insertion", "--time", "1", "--out", outDir, "--quiet");

@@ -7,27 +7,21 @@ using Anneal.Tests.Output;
 
 namespace Anneal.Tests.Cli;
 
-public sealed class EvaluateCommandTests : IDisposable
+public sealed class EvaluateCommandTests : CommandTest
 {
-    private readonly string _dir = Directory.CreateTempSubdirectory("anneal-eval-").FullName;
-    private readonly StringWriter _out = new();
-    private readonly StringWriter _err = new();
-
-    public void Dispose() => Directory.Delete(_dir, recursive: true);
-
     private int Evaluate(Plan plan, double capacityKg = 100, string? outDir = null) =>
-        EvaluateCommand.Execute(TinyJob.Loaded(TinyJob.Create(capacityKg: capacityKg)), plan, "plan.csv", outDir, new CliContext(_out, _err));
+        EvaluateCommand.Execute(TinyJob.Loaded(TinyJob.Create(capacityKg: capacityKg)), plan, "plan.csv", outDir, new CliContext(Out, Err));
 
     private static Plan AllOnOneVan => new([new PlannedRoute(0, [2, 0, 1])]);
 
     [Fact]
     public void A_feasible_plan_exits_0_and_writes_routes_and_summary()
     {
-        string outDir = Path.Combine(_dir, "eval");
+        string outDir = Path.Combine(Dir, "eval");
 
         Assert.Equal(ExitCodes.Success, Evaluate(AllOnOneVan, outDir: outDir));
 
-        Assert.Contains("Plan: feasible", _out.ToString(), StringComparison.Ordinal);
+        Assert.Contains("Plan: feasible", Out.ToString(), StringComparison.Ordinal);
         Assert.Equal(4, File.ReadAllLines(Path.Combine(outDir, "routes.csv")).Length);
         using var summary = JsonDocument.Parse(File.ReadAllText(Path.Combine(outDir, "summary.json")));
         Assert.Equal(JsonValueKind.Null, summary.RootElement.GetProperty("chosen").ValueKind);
@@ -41,9 +35,9 @@ public sealed class EvaluateCommandTests : IDisposable
         // 30 + 40 + 20 kg on a van that carries 80 kg: 10 kg over.
         Assert.Equal(ExitCodes.Infeasible, Evaluate(AllOnOneVan, capacityKg: 80));
 
-        Assert.Contains("INFEASIBLE", _out.ToString(), StringComparison.Ordinal);
-        Assert.Contains("hard  capacity", _out.ToString(), StringComparison.Ordinal);
-        Assert.Contains("loaded 10 units over", _out.ToString(), StringComparison.Ordinal);
+        Assert.Contains("INFEASIBLE", Out.ToString(), StringComparison.Ordinal);
+        Assert.Contains("hard  capacity", Out.ToString(), StringComparison.Ordinal);
+        Assert.Contains("loaded 10 units over", Out.ToString(), StringComparison.Ordinal);
     }
 
     [Fact]

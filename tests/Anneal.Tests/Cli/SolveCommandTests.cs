@@ -6,18 +6,12 @@ using Anneal.Tests.Output;
 
 namespace Anneal.Tests.Cli;
 
-public sealed class SolveCommandTests : IDisposable
+public sealed class SolveCommandTests : CommandTest
 {
-    private readonly string _dir = Directory.CreateTempSubdirectory("anneal-solve-").FullName;
-    private readonly StringWriter _out = new();
-    private readonly StringWriter _err = new();
-
-    public void Dispose() => Directory.Delete(_dir, recursive: true);
-
-    private CliContext Context(CancellationToken cancel = default) => new(_out, _err)
+    private CliContext Context(CancellationToken cancel = default) => new(Out, Err)
     {
         Cancel = cancel,
-        WorkingDirectory = _dir,
+        WorkingDirectory = Dir,
         Now = () => new DateTime(2026, 3, 4, 5, 6, 7),
     };
 
@@ -30,15 +24,15 @@ public sealed class SolveCommandTests : IDisposable
         int code = SolveCommand.Execute(TinyJob.Loaded(TinyJob.Create(optional: true)), Quick(), Context());
 
         Assert.Equal(ExitCodes.Success, code);
-        string folder = Path.Combine(_dir, "runs", "tiny-job-20260304-050607");
+        string folder = Path.Combine(Dir, "runs", "tiny-job-20260304-050607");
         foreach (var file in new[] { "routes.csv", "summary.json", "trace.csv" })
         {
             Assert.True(File.Exists(Path.Combine(folder, file)), file);
         }
 
-        Assert.Contains(folder, _out.ToString(), StringComparison.Ordinal);
-        Assert.Contains("Chosen: insertion", _out.ToString(), StringComparison.Ordinal);
-        Assert.Contains(Cautions.All[0], _out.ToString(), StringComparison.Ordinal);
+        Assert.Contains(folder, Out.ToString(), StringComparison.Ordinal);
+        Assert.Contains("Chosen: insertion", Out.ToString(), StringComparison.Ordinal);
+        Assert.Contains(Cautions.All[0], Out.ToString(), StringComparison.Ordinal);
         using var summary = JsonDocument.Parse(File.ReadAllText(Path.Combine(folder, "summary.json")));
         Assert.Equal("insertion", summary.RootElement.GetProperty("chosen").GetString());
         Assert.Equal(1, summary.RootElement.GetProperty("seed").GetInt32());
@@ -50,7 +44,7 @@ public sealed class SolveCommandTests : IDisposable
     {
         using var cancel = new CancellationTokenSource();
         cancel.Cancel();
-        string outDir = Path.Combine(_dir, "stopped");
+        string outDir = Path.Combine(Dir, "stopped");
 
         int code = SolveCommand.Execute(TinyJob.Loaded(TinyJob.Create(optional: true)), Quick(outDir), Context(cancel.Token));
 
@@ -66,15 +60,15 @@ public sealed class SolveCommandTests : IDisposable
         int code = SolveCommand.Execute(TinyJob.Loaded(TinyJob.Create()), Quick() with { Solvers = "insertion,warp-drive" }, Context());
 
         Assert.Equal(ExitCodes.InvalidInput, code);
-        Assert.Contains("warp-drive", _err.ToString(), StringComparison.Ordinal);
-        Assert.Contains("insertion", _err.ToString(), StringComparison.Ordinal);
-        Assert.False(Directory.Exists(Path.Combine(_dir, "runs")));
+        Assert.Contains("warp-drive", Err.ToString(), StringComparison.Ordinal);
+        Assert.Contains("insertion", Err.ToString(), StringComparison.Ordinal);
+        Assert.False(Directory.Exists(Path.Combine(Dir, "runs")));
     }
 
     [Fact]
-    public void An_output_folder_that_cannot_be_made_is_an_output_error_naming_it()
+    public void AnOutput_folder_that_cannot_be_made_is_anOutputError_naming_it()
     {
-        string blocker = Path.Combine(_dir, "a-file");
+        string blocker = Path.Combine(Dir, "a-file");
         File.WriteAllText(blocker, "not a folder");
         string outDir = Path.Combine(blocker, "run");
 

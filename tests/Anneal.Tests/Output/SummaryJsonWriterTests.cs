@@ -5,12 +5,8 @@ using Anneal.Formats.Output;
 
 namespace Anneal.Tests.Output;
 
-public sealed class SummaryJsonWriterTests : IDisposable
+public sealed class SummaryJsonWriterTests : TempFolderTest
 {
-    private readonly string _dir = Directory.CreateTempSubdirectory("anneal-summary-").FullName;
-
-    public void Dispose() => Directory.Delete(_dir, recursive: true);
-
     [Fact]
     public void The_summary_parses_and_has_every_documented_field()
     {
@@ -20,7 +16,7 @@ public sealed class SummaryJsonWriterTests : IDisposable
             instance.Name, "csv-job", "cost", SummaryJsonWriter.Describe(instance, evaluation),
             [new SolverSummary("insertion", evaluation.Objective, evaluation.Distance, 1, evaluation.Feasible, 0.1, 0.2, "completed", null, [])],
             "insertion", 7, 5, false, Cautions.All, new DateTimeOffset(2026, 1, 2, 3, 4, 5, TimeSpan.Zero));
-        string path = Path.Combine(_dir, SummaryJsonWriter.FileName);
+        string path = Path.Combine(Dir, SummaryJsonWriter.FileName);
 
         SummaryJsonWriter.Write(path, document);
 
