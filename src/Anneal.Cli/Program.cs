@@ -1,1 +1,7 @@
-return 0;
+using Anneal.Cli;
+
+return CliApp.Run(args, new CliContext(Console.Out, Console.Error)
+{
+    ProgressIsTerminal = !Console.IsErrorRedirected,
+    HandleSignals = true,
+});

@@ -1,0 +1,71 @@
+using System.CommandLine;
+using Anneal.Cli.Commands;
+using Anneal.Cli.Reporting;
+using Anneal.Formats.Input;
+using Anneal.Formats.Output;
+
+namespace Anneal.Cli;
+
+/// <summary>The `anneal` command, callable in-process: parses the arguments, runs the command, maps failures to exit codes.</summary>
+public static class CliApp
+{
+    public static int Run(string[] args, TextWriter stdout, TextWriter stderr) => Run(args, new CliContext(stdout, stderr));
+
+    public static int Run(string[] args, CliContext context)
+    {
+        try
+        {
+            var root = BuildRoot(context);
+            var parsed = root.Parse(args);
+            if (parsed.Errors.Count > 0)
+            {
+                foreach (var error in parsed.Errors)
+                {
+                    context.Err.WriteLine("anneal: " + error.Message);
+                }
+
+                context.Err.WriteLine("Try 'anneal --help' or 'anneal <command> --help'.");
+                return ExitCodes.InvalidInput;
+            }
+
+            return parsed.Invoke(new InvocationConfiguration
+            {
+                Output = context.Out,
+                Error = context.Err,
+                EnableDefaultExceptionHandler = false,
+
+                // Signals are handled by `solve` itself so that it can still write the best plan.
+                ProcessTerminationTimeout = null,
+            });
+        }
+        catch (InputException e)
+        {
+            ProblemPrinter.Print(context.Err, e.Problems);
+            return ExitCodes.InvalidInput;
+        }
+        catch (OutputException e)
+        {
+            context.Err.WriteLine("anneal: " + e.Message);
+            return ExitCodes.OutputFailed;
+        }
+        catch (Exception e)
+        {
+            context.Err.WriteLine("anneal: internal error: " + e.Message);
+            if (Environment.GetEnvironmentVariable("ANNEAL_DEBUG") == "1")
+            {
+                context.Err.WriteLine(e.ToString());
+            }
+
+            return ExitCodes.InternalError;
+        }
+    }
+
+    public static RootCommand BuildRoot(CliContext context)
+    {
+        var root = new RootCommand("Anneal plans delivery routes under hard and soft rules (vehicle routing with capacities and time windows).");
+        root.Subcommands.Add(CheckCommand.Create(context));
+        root.Subcommands.Add(EvaluateCommand.Create(context));
+        root.Subcommands.Add(SolveCommand.Create(context));
+        return root;
+    }
+}

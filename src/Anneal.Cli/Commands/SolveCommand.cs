@@ -1,0 +1,165 @@
+using System.CommandLine;
+using System.Globalization;
+using Anneal.Cli.Reporting;
+using Anneal.Formats.Input;
+using Anneal.Search.Running;
+
+namespace Anneal.Cli.Commands;
+
+/// <summary>`anneal solve`: runs the chosen solvers side by side and writes the best plan they found.</summary>
+public static class SolveCommand
+{
+    /// <summary>Search time when neither the command line nor the job says (seconds).</summary>
+    public const double DefaultTimeSeconds = 30;
+
+    public static Command Create(CliContext context)
+    {
+        var input = SharedOptions.Input();
+        var solvers = new Option<string?>("--solvers") { Description = "Comma-separated solver names, e.g. sa,tabu. Default: the job's list, else all that apply.", HelpName = "list" };
+        var time = new Option<double?>("--time") { Description = $"Wall-clock budget in seconds. Default: the job's timeSeconds, else {DefaultTimeSeconds}.", HelpName = "seconds" };
+        var iterations = new Option<long?>("--iterations") { Description = "Also stop each solver after this many iterations (reproducible with --seed).", HelpName = "n" };
+        var objective = SharedOptions.Objective();
+        var seed = new Option<int?>("--seed") { Description = "Random seed (solver k uses seed + k). Default: the job's seed, else 1.", HelpName = "n" };
+        var threads = new Option<int?>("--threads") { Description = "Independent searches per solver run in parallel. Default 1.", HelpName = "n" };
+        var output = SharedOptions.Out("Output folder. Default: runs/<instance>-<yyyyMMdd-HHmmss> under the current folder.");
+        var quiet = new Option<bool>("--quiet") { Description = "No progress lines while solving." };
+        var command = new Command("solve", "Search for a good plan and write routes.csv, summary.json and trace.csv; exit 0 feasible, 3 infeasible, 130 interrupted.");
+        command.Arguments.Add(input);
+        foreach (Option option in new Option[] { solvers, time, iterations, objective, seed, threads, output, quiet })
+        {
+            command.Options.Add(option);
+        }
+
+        command.SetAction(parse =>
+        {
+            var request = new SolveRequest
+            {
+                Solvers = parse.GetValue(solvers),
+                TimeSeconds = parse.GetValue(time),
+                Iterations = parse.GetValue(iterations),
+                Objective = parse.GetValue(objective),
+                Seed = parse.GetValue(seed),
+                Threads = parse.GetValue(threads),
+                OutDir = parse.GetValue(output),
+                Quiet = parse.GetValue(quiet),
+            };
+            var error = Validate(request);
+            if (error is not null)
+            {
+                context.Err.WriteLine("anneal: " + error);
+                return ExitCodes.InvalidInput;
+            }
+
+            return Execute(InputLoader.Load(parse.GetValue(input)!), request, context);
+        });
+        return command;
+    }
+
+    public static string? Validate(SolveRequest r)
+    {
+        if (r.TimeSeconds is { } t && !(t > 0 && double.IsFinite(t)))
+        {
+            return "--time must be a positive number of seconds";
+        }
+
+        if (r.Iterations is <= 0)
+        {
+            return "--iterations must be at least 1";
+        }
+
+        return r.Threads is <= 0 ? "--threads must be at least 1" : null;
+    }
+
+    public static int Execute(LoadedInput input, SolveRequest request, CliContext context)
+    {
+        var instance = SharedOptions.WithObjective(input, request.Objective);
+        var names = SolverNames(request.Solvers, input.Settings.Solvers, instance, out string? unknown);
+        if (names is null)
+        {
+            context.Err.WriteLine($"anneal: unknown solver '{unknown}'; known solvers: {string.Join(", ", SolverCatalog.Names.Order(StringComparer.Ordinal))}");
+            return ExitCodes.InvalidInput;
+        }
+
+        double seconds = request.TimeSeconds ?? input.Settings.TimeSeconds ?? DefaultTimeSeconds;
+        int seed = request.Seed ?? input.Settings.Seed ?? 1;
+        var options = new SolveOptions
+        {
+            TimeLimit = TimeSpan.FromSeconds(seconds),
+            IterationLimit = request.Iterations,
+            Seed = seed,
+            Threads = request.Threads ?? 1,
+        };
+
+        // Create the folder first: better to fail now than after the whole time budget.
+        string folder = OutputFolder.Create(request.OutDir ?? OutputFolder.Default(context.WorkingDirectory, instance.Name, context.Now()));
+        if (!request.Quiet)
+        {
+            context.Err.WriteLine(string.Create(CultureInfo.InvariantCulture,
+                $"Solving {InstanceDescription.Size(instance)} with {string.Join(", ", names)} for up to {seconds:0.##} s (seed {seed}); Ctrl+C stops early and keeps the best plan."));
+        }
+
+        using var stop = CancellationTokenSource.CreateLinkedTokenSource(context.Cancel);
+        using var signals = context.HandleSignals ? new ShutdownSignals(stop) : null;
+        var progress = request.Quiet ? null : new ProgressReporter(context.Err, context.ProgressIsTerminal);
+        var outcome = RunCoordinator.Run(instance, names, options, progress is null ? null : progress.Report, stop.Token);
+        progress?.Finish();
+        bool interrupted = stop.IsCancellationRequested;
+
+        var best = outcome.Best;
+        var facts = new RunFiles.RunFacts(seed, seconds, interrupted, context.Now().ToUniversalTime());
+        RunFiles.Write(folder, input, instance, best.Evaluation, outcome, facts);
+
+        var w = context.Out;
+        if (interrupted)
+        {
+            w.WriteLine("Interrupted: the best plan found so far is written.");
+        }
+
+        PrintSolvers(w, outcome);
+        w.WriteLine($"Chosen: {best.Result.Solver}");
+        PlanReport.Print(w, instance, best.Evaluation);
+        w.WriteLine($"Written: {folder}");
+        return interrupted ? ExitCodes.Interrupted : best.Evaluation.Feasible ? ExitCodes.Success : ExitCodes.Infeasible;
+    }
+
+    /// <summary>Command line first, then the job's list, then the catalogue's defaults; null (with the name) when one is unknown.</summary>
+    public static IReadOnlyList<string>? SolverNames(string? commandLine, IReadOnlyList<string>? fromJob, Core.Model.Instance instance, out string? unknown)
+    {
+        IEnumerable<string> asked = commandLine is not null
+            ? commandLine.Split(',', StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries)
+            : fromJob ?? SolverCatalog.Defaults(instance);
+        var names = new List<string>();
+        foreach (var name in asked)
+        {
+            if (!SolverCatalog.Exists(name))
+            {
+                unknown = name;
+                return null;
+            }
+
+            if (!names.Contains(name, StringComparer.OrdinalIgnoreCase))
+            {
+                names.Add(name);
+            }
+        }
+
+        unknown = names.Count == 0 ? string.Empty : null;
+        return names.Count == 0 ? null : names;
+    }
+
+    private static void PrintSolvers(TextWriter w, RunOutcome outcome)
+    {
+        w.WriteLine("Solvers:");
+        foreach (var judged in outcome.Results)
+        {
+            var r = judged.Result;
+            var e = judged.Evaluation;
+            w.WriteLine(string.Create(CultureInfo.InvariantCulture,
+                $"  {r.Solver,-12} objective {e.Objective,12:0.00}  vehicles {e.VehiclesUsed,3}  distance {e.Distance,10:0.00}  {(e.Feasible ? "feasible" : "infeasible"),-10}  best at {r.SecondsToBest:0.0} of {r.Seconds:0.0} s  {r.Status}"));
+            foreach (var note in r.Notes ?? [])
+            {
+                w.WriteLine("      note: " + note);
+            }
+        }
+    }
+}

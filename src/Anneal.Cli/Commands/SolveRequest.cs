@@ -1,0 +1,14 @@
+namespace Anneal.Cli.Commands;
+
+/// <summary>What the user asked of `solve` on the command line; null means "take the job's setting or the default".</summary>
+public sealed record SolveRequest
+{
+    public string? Solvers { get; init; }
+    public double? TimeSeconds { get; init; }
+    public long? Iterations { get; init; }
+    public string? Objective { get; init; }
+    public int? Seed { get; init; }
+    public int? Threads { get; init; }
+    public string? OutDir { get; init; }
+    public bool Quiet { get; init; }
+}

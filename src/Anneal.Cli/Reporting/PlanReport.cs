@@ -1,0 +1,81 @@
+using System.Globalization;
+using Anneal.Core.Evaluation;
+using Anneal.Core.Model;
+using Anneal.Formats.Output;
+
+namespace Anneal.Cli.Reporting;
+
+/// <summary>The printed verdict on a plan: objective and its parts, vehicles, distance, feasibility, every violation, the cautions.</summary>
+public static class PlanReport
+{
+    public static void Print(TextWriter w, Instance instance, PlanEvaluation e)
+    {
+        int hardCount = 0;
+        foreach (var v in e.Violations)
+        {
+            hardCount += v.Hard ? 1 : 0;
+        }
+
+        string unit = instance.TimeUnit == "min" ? " km" : string.Empty;
+        string timeUnit = string.IsNullOrEmpty(instance.TimeUnit) ? string.Empty : " " + instance.TimeUnit;
+        w.WriteLine(e.Feasible ? "Plan: feasible (breaks no hard rule)" : $"Plan: INFEASIBLE (breaks {InstanceDescription.Plural(hardCount, "hard rule")})");
+        w.WriteLine(Line("objective", $"{Num(e.Objective)} ({instance.Objective.ToText()})"));
+        w.WriteLine(Line("  made of", Breakdown(e.Breakdown)));
+        w.WriteLine(Line("vehicles", $"{e.VehiclesUsed} of {instance.Vehicles.Count}"));
+        w.WriteLine(Line("distance", Num(e.Distance) + unit));
+        w.WriteLine(Line("duration", Num(e.Duration) + timeUnit + " (sum over routes)"));
+        var unserved = new List<string>();
+        foreach (int s in e.Unserved)
+        {
+            unserved.Add(instance.Stops[s].Id);
+        }
+
+        w.WriteLine(Line("unserved", unserved.Count == 0 ? "none" : $"{unserved.Count}: {string.Join(", ", unserved)}"));
+        if (e.Violations.Count > 0)
+        {
+            w.WriteLine($"Violations ({e.Violations.Count}):");
+            foreach (var v in e.Violations)
+            {
+                w.WriteLine($"  {(v.Hard ? "hard" : "soft")}  {v.Rule,-13} {v.Message}");
+            }
+        }
+
+        PrintCautions(w);
+    }
+
+    public static void PrintCautions(TextWriter w)
+    {
+        w.WriteLine("Cautions:");
+        foreach (var c in Cautions.All)
+        {
+            w.WriteLine("  - " + c);
+        }
+    }
+
+    public static string Num(double value) => value.ToString("0.00", CultureInfo.InvariantCulture);
+
+    private static string Line(string label, string value) => $"  {label,-10} {value}";
+
+    private static string Breakdown(CostBreakdown b)
+    {
+        var parts = new List<string>();
+        Add("fixed", b.Fixed);
+        Add("distance", b.Distance);
+        Add("time", b.Time);
+        Add("vehicles", b.Vehicles);
+        Add("lateness", b.Lateness);
+        Add("overload", b.Overload);
+        Add("overtime", b.Overtime);
+        Add("duration excess", b.DurationExcess);
+        Add("unserved", b.Unserved);
+        return parts.Count == 0 ? "nothing (every part is zero)" : string.Join(" + ", parts);
+
+        void Add(string name, double value)
+        {
+            if (value != 0)
+            {
+                parts.Add($"{name} {Num(value)}");
+            }
+        }
+    }
+}

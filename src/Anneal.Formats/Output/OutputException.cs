@@ -1,0 +1,25 @@
+namespace Anneal.Formats.Output;
+
+/// <summary>An output file or folder could not be written; names the path so the user can fix permissions or space.</summary>
+public sealed class OutputException : Exception
+{
+    public string Path { get; private init; } = string.Empty;
+
+    public OutputException()
+        : base("output cannot be written")
+    {
+    }
+
+    public OutputException(string message)
+        : base(message)
+    {
+    }
+
+    public OutputException(string message, Exception inner)
+        : base(message, inner)
+    {
+    }
+
+    public static OutputException For(string path, Exception inner) =>
+        new($"cannot write {path}: {inner.Message}", inner) { Path = path };
+}

@@ -1,0 +1,55 @@
+namespace Anneal.Formats.Output;
+
+// The shape of summary.json. Field names are the README's contract; serialised in camelCase.
+
+/// <summary>The whole summary.json.</summary>
+public sealed record SummaryDocument(
+    string Instance,
+    string Format,
+    string ObjectiveKind,
+    PlanSummary Plan,
+    IReadOnlyList<SolverSummary> Solvers,
+    string? Chosen,
+    int? Seed,
+    double? TimeLimitSeconds,
+    bool Interrupted,
+    IReadOnlyList<string> Cautions,
+    DateTimeOffset GeneratedAt);
+
+/// <summary>The written plan as the evaluator judged it.</summary>
+public sealed record PlanSummary(
+    double Objective,
+    double Distance,
+    double Duration,
+    int Vehicles,
+    bool Feasible,
+    IReadOnlyList<string> Unserved,
+    BreakdownSummary Breakdown,
+    IReadOnlyList<ViolationSummary> Violations);
+
+public sealed record BreakdownSummary(
+    double Fixed,
+    double Distance,
+    double Time,
+    double Vehicles,
+    double Lateness,
+    double Overload,
+    double Overtime,
+    double DurationExcess,
+    double Unserved,
+    double Total);
+
+public sealed record ViolationSummary(string Rule, bool Hard, string? Vehicle, string? Stop, double Amount, string Message);
+
+/// <summary>One solver's run, judged by the evaluator (not by the solver's own numbers).</summary>
+public sealed record SolverSummary(
+    string Solver,
+    double Objective,
+    double Distance,
+    int Vehicles,
+    bool Feasible,
+    double SecondsToBest,
+    double Seconds,
+    string Status,
+    double? LowerBound,
+    IReadOnlyList<string> Notes);

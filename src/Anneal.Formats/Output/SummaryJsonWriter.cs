@@ -1,0 +1,52 @@
+using System.Text.Json;
+using System.Text.Json.Serialization;
+using Anneal.Core.Evaluation;
+using Anneal.Core.Model;
+
+namespace Anneal.Formats.Output;
+
+/// <summary>summary.json: the plan's verdict and cost breakdown, every solver's result and the run's settings.</summary>
+public static class SummaryJsonWriter
+{
+    public const string FileName = "summary.json";
+
+    public static JsonSerializerOptions Options { get; } = new()
+    {
+        WriteIndented = true,
+        PropertyNamingPolicy = JsonNamingPolicy.CamelCase,
+        DefaultIgnoreCondition = JsonIgnoreCondition.Never,
+
+        // A diverged solver may report an infinite objective; write it rather than fail the whole run.
+        NumberHandling = JsonNumberHandling.AllowNamedFloatingPointLiterals,
+    };
+
+    public static void Write(string path, SummaryDocument document) =>
+        AtomicFile.Write(path, stream => JsonSerializer.Serialize(stream, document, Options));
+
+    /// <summary>The plan part of the summary from the evaluator's verdict.</summary>
+    public static PlanSummary Describe(Instance instance, PlanEvaluation evaluation)
+    {
+        var b = evaluation.Breakdown;
+        var unserved = new List<string>(evaluation.Unserved.Count);
+        foreach (int s in evaluation.Unserved)
+        {
+            unserved.Add(instance.Stops[s].Id);
+        }
+
+        var violations = new List<ViolationSummary>(evaluation.Violations.Count);
+        foreach (var v in evaluation.Violations)
+        {
+            violations.Add(new ViolationSummary(v.Rule, v.Hard, v.Vehicle, v.Stop, v.Amount, v.Message));
+        }
+
+        return new PlanSummary(
+            evaluation.Objective,
+            evaluation.Distance,
+            evaluation.Duration,
+            evaluation.VehiclesUsed,
+            evaluation.Feasible,
+            unserved,
+            new BreakdownSummary(b.Fixed, b.Distance, b.Time, b.Vehicles, b.Lateness, b.Overload, b.Overtime, b.DurationExcess, b.Unserved, b.Total),
+            violations);
+    }
+}
