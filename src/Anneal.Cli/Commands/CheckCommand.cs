@@ -1,5 +1,6 @@
 using System.CommandLine;
 using Anneal.Cli.Reporting;
+using Anneal.Core.Screening;
 using Anneal.Formats.Input;
 
 namespace Anneal.Cli.Commands;
@@ -33,6 +34,20 @@ public static class CheckCommand
         context.Out.WriteLine($"{path}: valid ({loaded.Format})");
         context.Out.WriteLine("  " + InstanceDescription.Size(instance));
         context.Out.WriteLine("  " + InstanceDescription.Rules(instance));
+        var findings = StopScreen.Screen(instance);
+        if (findings.Count == 0)
+        {
+            context.Out.WriteLine("  screening: every stop can be served by at least one vehicle");
+        }
+        else
+        {
+            context.Out.WriteLine($"  screening: {findings.Count} stop(s) no vehicle can ever serve (they will be left unserved or break a hard rule):");
+            foreach (var f in findings)
+            {
+                context.Out.WriteLine($"    stop {f.StopId}: {f.Reason}");
+            }
+        }
+
         return ExitCodes.Success;
     }
 }

@@ -1,5 +1,6 @@
 using System.CommandLine;
 using Anneal.Cli.Reporting;
+using Anneal.Jobs;
 using Anneal.Core.Evaluation;
 using Anneal.Core.Plans;
 using Anneal.Formats.Input;

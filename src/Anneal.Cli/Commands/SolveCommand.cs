@@ -2,6 +2,7 @@ using System.CommandLine;
 using System.Globalization;
 using Anneal.Cli.Reporting;
 using Anneal.Formats.Input;
+using Anneal.Jobs;
 using Anneal.Search.Running;
 
 namespace Anneal.Cli.Commands;
@@ -73,7 +74,7 @@ public static class SolveCommand
     public static int Execute(LoadedInput input, SolveRequest request, CliContext context)
     {
         var instance = SharedOptions.WithObjective(input, request.Objective);
-        var names = SolverNames(request.Solvers, input.Settings.Solvers, instance, out string? unknown);
+        var names = SolverChoice.Resolve(request.Solvers, input.Settings.Solvers, instance, out string? unknown);
         if (names is null)
         {
             context.Err.WriteLine($"anneal: unknown solver '{unknown}'; known solvers: {string.Join(", ", SolverCatalog.Names.Order(StringComparer.Ordinal))}");
@@ -120,31 +121,6 @@ public static class SolveCommand
         PlanReport.Print(w, instance, best.Evaluation);
         w.WriteLine($"Written: {folder}");
         return interrupted ? ExitCodes.Interrupted : best.Evaluation.Feasible ? ExitCodes.Success : ExitCodes.Infeasible;
-    }
-
-    /// <summary>Command line first, then the job's list, then the catalogue's defaults; null (with the name) when one is unknown.</summary>
-    public static IReadOnlyList<string>? SolverNames(string? commandLine, IReadOnlyList<string>? fromJob, Core.Model.Instance instance, out string? unknown)
-    {
-        IEnumerable<string> asked = commandLine is not null
-            ? commandLine.Split(',', StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries)
-            : fromJob ?? SolverCatalog.Defaults(instance);
-        var names = new List<string>();
-        foreach (var name in asked)
-        {
-            if (!SolverCatalog.Exists(name))
-            {
-                unknown = name;
-                return null;
-            }
-
-            if (!names.Contains(name, StringComparer.OrdinalIgnoreCase))
-            {
-                names.Add(name);
-            }
-        }
-
-        unknown = names.Count == 0 ? string.Empty : null;
-        return names.Count == 0 ? null : names;
     }
 
     private static void PrintSolvers(TextWriter w, RunOutcome outcome)

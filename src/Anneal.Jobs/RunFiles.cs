@@ -4,7 +4,7 @@ using Anneal.Formats.Input;
 using Anneal.Formats.Output;
 using Anneal.Search.Running;
 
-namespace Anneal.Cli.Reporting;
+namespace Anneal.Jobs;
 
 /// <summary>Writes a run's files into its output folder: routes.csv, summary.json and (after a search) trace.csv.</summary>
 public static class RunFiles
