@@ -39,6 +39,7 @@ public sealed class SearchState
     private int _infeasibleRoutes;
     private int _mandatoryUnserved;
     private readonly int[] _scratch;
+    private readonly int[] _version;
     private readonly int[] _scratchB;
     private PenaltyWeights _weights;
 
@@ -68,6 +69,7 @@ public sealed class SearchState
         _scratch = new int[n + 1];
         _scratchB = new int[n + 1];
         _metrics = new RouteMetrics[RouteCount];
+        _version = new int[RouteCount];
         _objective = new double[RouteCount];
         _penalized = new double[RouteCount];
         _feasible = new bool[RouteCount];
@@ -101,6 +103,9 @@ public sealed class SearchState
     public PenaltyWeights Weights => _weights;
 
     public int RouteOf(int stop) => _routeOf[stop];
+
+    /// <summary>Changes every time the route changes; lets a search cache move evaluations per route pair.</summary>
+    public int Version(int route) => _version[route];
     public int PositionOf(int stop) => _posOf[stop];
     public int Length(int route) => _length[route];
     public int StopAt(int route, int position) => _stops[route][position];
@@ -235,6 +240,84 @@ public sealed class SearchState
 
         return infeasible == 0 && mandatory == 0;
     }
+
+    /// <summary>Feasibility after a move whose parts were computed earlier, against the state as it is now.</summary>
+    public bool FeasibleAfter(in MoveParts parts) =>
+        _infeasibleRoutes + parts.InfeasibleRoutes == 0 && _mandatoryUnserved + parts.Unserved == 0;
+
+    /// <summary>The move's effect split by rule (see <see cref="MoveParts"/>).</summary>
+    public MoveParts EvaluateParts(ref MoveDraft move)
+    {
+        var parts = default(MoveParts);
+        bool feasibleA = true, feasibleB = true;
+        if (move.RouteCount > 0)
+        {
+            feasibleA = AddRouteParts(ref move.A, ref parts);
+        }
+
+        if (move.RouteCount > 1)
+        {
+            feasibleB = AddRouteParts(ref move.B, ref parts);
+        }
+
+        if (move.Dropped >= 0)
+        {
+            parts.Objective += CostModel.UnservedObjective(Instance, move.Dropped);
+            parts.Unserved += Instance.MayDrop(move.Dropped) ? 0 : 1;
+        }
+
+        if (move.Inserted >= 0)
+        {
+            parts.Objective -= CostModel.UnservedObjective(Instance, move.Inserted);
+            parts.Unserved -= Instance.MayDrop(move.Inserted) ? 0 : 1;
+        }
+
+        parts.FeasibleAfter = FeasibleAfter(ref move, feasibleA, feasibleB);
+        if (move.RouteCount > 0)
+        {
+            parts.InfeasibleRoutes += (feasibleA ? 0 : 1) - (_feasible[move.A.Route] ? 0 : 1);
+        }
+
+        if (move.RouteCount > 1)
+        {
+            parts.InfeasibleRoutes += (feasibleB ? 0 : 1) - (_feasible[move.B.Route] ? 0 : 1);
+        }
+
+        return parts;
+    }
+
+    private bool AddRouteParts(ref RouteDraft draft, ref MoveParts parts)
+    {
+        var m = FastPath ? MeasureBySegments(ref draft) : MeasureByScheduler(ref draft);
+        ref readonly var old = ref _metrics[draft.Route];
+        var rules = Instance.Rules;
+        parts.Objective += CostModel.RouteObjective(Instance, draft.Route, m) - _objective[draft.Route];
+        if (rules.TimeWindows.Hard)
+        {
+            parts.TimeWindow += Amount(m.TimeWindowViolation, m) - Amount(old.TimeWindowViolation, old);
+        }
+
+        if (rules.Capacity.Hard)
+        {
+            parts.Capacity += Amount(m.Overload, m) - Amount(old.Overload, old);
+        }
+
+        if (rules.ShiftEnd.Hard)
+        {
+            parts.Overtime += Amount(m.Overtime, m) - Amount(old.Overtime, old);
+        }
+
+        if (rules.MaxDuration.Hard)
+        {
+            parts.Duration += Amount(m.DurationExcess, m) - Amount(old.DurationExcess, old);
+        }
+
+        parts.Skill += Amount(m.MissingSkills, m) - Amount(old.MissingSkills, old);
+        return CostModel.RouteFeasible(Instance, m);
+    }
+
+    // An empty route breaks nothing, whatever its measures say.
+    private static double Amount(double value, in RouteMetrics m) => m.StopCount == 0 ? 0 : value;
 
     /// <summary>Full effect of a move: penalized and objective change, and feasibility afterwards.</summary>
     public MoveEffect Evaluate(ref MoveDraft move)
@@ -544,6 +627,7 @@ public sealed class SearchState
     /// <summary>Recomputes positions, summaries, measures and costs of one route after it changed.</summary>
     private void Refresh(int route)
     {
+        _version[route]++;
         var stops = _stops[route];
         int len = _length[route];
         for (int k = 0; k < len; k++)

@@ -10,6 +10,7 @@ public static class SolverCatalog
     {
         ["insertion"] = () => new InsertionSolver(),
         ["sa"] = () => new Annealing.SimulatedAnnealing(),
+        ["tabu"] = () => new Tabu.TabuSearch(),
     };
 
     /// <summary>Register a solver that lives in another assembly (OR-Tools adapters register themselves from the host).</summary>

@@ -46,6 +46,8 @@ public sealed class IncrementalEvaluationTests
                 double objectiveBefore = PlanEvaluator.Evaluate(instance, state.ToPlan()).Objective;
                 double delta = state.Delta(ref move);
                 var effect = state.Evaluate(ref move);
+                var parts = state.EvaluateParts(ref move);
+                bool partsFeasible = state.FeasibleAfter(parts);
                 state.Apply(ref move);
                 var plan = state.ToPlan();
                 var truth = PlanEvaluator.Evaluate(instance, plan);
@@ -57,6 +59,10 @@ public sealed class IncrementalEvaluationTests
                 Assert.True(Math.Abs(truth.Objective - objectiveBefore - effect.Objective) <= tolerance,
                     $"seed {seed} step {step} {move.Kind}: objective delta {effect.Objective}, exact {truth.Objective - objectiveBefore}");
                 Assert.Equal(truth.Feasible, effect.FeasibleAfter);
+                Assert.True(Math.Abs(parts.Penalized(weights) - delta) <= tolerance, $"{move.Kind}: parts {parts.Penalized(weights)} vs delta {delta}");
+                Assert.True(Math.Abs(parts.Objective - effect.Objective) <= tolerance, "parts objective differs");
+                Assert.Equal(truth.Feasible, partsFeasible);
+                Assert.Equal(truth.Feasible, parts.FeasibleAfter);
                 Assert.Equal(truth.Feasible, state.Feasible);
                 Assert.True(Math.Abs(state.CurrentPenalized - after) <= tolerance, "running penalized total drifted");
                 Assert.True(Math.Abs(state.CurrentObjective - truth.Objective) <= tolerance, "running objective total drifted");
