@@ -16,35 +16,10 @@ public static class CostModel
             return 0;
         }
 
-        var v = instance.Vehicles[vehicle];
-        var rules = instance.Rules;
-        double cost = instance.Objective switch
-        {
-            Objective.Cost => v.FixedCost + (m.Distance * v.CostPerDistance) + (m.Duration / instance.TimeUnitsPerHour * v.CostPerHour),
-            Objective.Distance => m.Distance,
-            _ => instance.VehicleWeight + m.Distance,
-        };
-        if (!rules.TimeWindows.Hard)
-        {
-            cost += m.TimeWindowViolation * rules.TimeWindows.Price;
-        }
-
-        if (!rules.Capacity.Hard)
-        {
-            cost += m.Overload * rules.Capacity.Price;
-        }
-
-        if (!rules.ShiftEnd.Hard)
-        {
-            cost += m.Overtime * rules.ShiftEnd.Price;
-        }
-
-        if (!rules.MaxDuration.Hard)
-        {
-            cost += m.DurationExcess * rules.MaxDuration.Price;
-        }
-
-        return cost;
+        var c = instance.Costs;
+        return c.Base[vehicle] + (m.Distance * c.PerDistance[vehicle]) + (m.Duration * c.PerTime[vehicle])
+            + (m.TimeWindowViolation * c.SoftTimeWindow) + (m.Overload * c.SoftCapacity)
+            + (m.Overtime * c.SoftOvertime) + (m.DurationExcess * c.SoftDuration);
     }
 
     /// <summary>Weighted amount by which the route breaks hard rules (zero for a feasible route).</summary>
@@ -55,29 +30,10 @@ public static class CostModel
             return 0;
         }
 
-        var rules = instance.Rules;
-        double p = m.MissingSkills * w.Skill;
-        if (rules.TimeWindows.Hard)
-        {
-            p += m.TimeWindowViolation * w.TimeWindow;
-        }
-
-        if (rules.Capacity.Hard)
-        {
-            p += m.Overload * w.Capacity;
-        }
-
-        if (rules.ShiftEnd.Hard)
-        {
-            p += m.Overtime * w.Overtime;
-        }
-
-        if (rules.MaxDuration.Hard)
-        {
-            p += m.DurationExcess * w.Duration;
-        }
-
-        return p;
+        var c = instance.Costs;
+        return (m.MissingSkills * w.Skill) + (m.TimeWindowViolation * c.HardTimeWindow * w.TimeWindow)
+            + (m.Overload * c.HardCapacity * w.Capacity) + (m.Overtime * c.HardOvertime * w.Overtime)
+            + (m.DurationExcess * c.HardDuration * w.Duration);
     }
 
     /// <summary>Search cost of a route: objective part plus weighted hard violations.</summary>
@@ -103,11 +59,11 @@ public static class CostModel
             return true;
         }
 
-        var rules = instance.Rules;
+        var c = instance.Costs;
         return m.MissingSkills == 0
-            && (!rules.TimeWindows.Hard || m.TimeWindowViolation <= tolerance)
-            && (!rules.Capacity.Hard || m.Overload <= tolerance)
-            && (!rules.ShiftEnd.Hard || m.Overtime <= tolerance)
-            && (!rules.MaxDuration.Hard || m.DurationExcess <= tolerance);
+            && m.TimeWindowViolation * c.HardTimeWindow <= tolerance
+            && m.Overload * c.HardCapacity <= tolerance
+            && m.Overtime * c.HardOvertime <= tolerance
+            && m.DurationExcess * c.HardDuration <= tolerance;
     }
 }

@@ -120,7 +120,11 @@ public sealed class Instance
         }
 
         VehicleWeight = Math.Pow(10, Math.Ceiling(Math.Log10(bound)) + 1);
+        Costs = new Evaluation.CostTable(this);
     }
+
+    /// <summary>The objective and rules as flat coefficients (see <see cref="Evaluation.CostTable"/>).</summary>
+    public Evaluation.CostTable Costs { get; }
 
     public int DepotLocation(int depot) => StopCount + depot;
 

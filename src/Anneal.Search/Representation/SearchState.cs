@@ -42,6 +42,7 @@ public sealed class SearchState
     private readonly int[] _version;
     private readonly int[] _scratchB;
     private PenaltyWeights _weights;
+    private readonly CostTable _costs;
 
     public SearchState(Instance instance, PenaltyWeights weights)
     {
@@ -49,6 +50,7 @@ public sealed class SearchState
         StopCount = instance.StopCount;
         RouteCount = instance.Vehicles.Count;
         _weights = weights;
+        _costs = instance.Costs;
         FastPath = instance.Rules.TimeWindows.Hard && instance.SingleWindows && instance.DimensionCount <= 4;
         int n = StopCount;
         _stops = new int[RouteCount][];
@@ -505,16 +507,16 @@ public sealed class SearchState
         }
 
         Append(ref acc, in _depotEnd[vehicle], travel);
-        var veh = Instance.Vehicles[vehicle];
+        var costs = _costs;
         m.Distance = acc.Distance;
         m.Duration = acc.Duration;
         m.TimeWindowViolation = acc.TimeWarp;
         m.Departure = acc.Earliest;
         m.Return = acc.Earliest + acc.Duration - acc.TimeWarp;
-        m.Overtime = Math.Max(0, m.Return - veh.ShiftEnd);
-        m.DurationExcess = Math.Max(0, m.Duration - veh.MaxDuration);
+        m.Overtime = Math.Max(0, m.Return - costs.ShiftEnd(vehicle));
+        m.DurationExcess = Math.Max(0, m.Duration - costs.MaxDuration(vehicle));
         m.Overload = Overload(vehicle, in acc);
-        m.MissingSkills = System.Numerics.BitOperations.PopCount(acc.Skills & ~veh.Skills);
+        m.MissingSkills = System.Numerics.BitOperations.PopCount(acc.Skills & ~costs.Skills(vehicle));
         return m;
     }
 

@@ -1,0 +1,17 @@
+using Anneal.Core.Model;
+
+namespace Anneal.Experiments;
+
+/// <summary>What a benchmark runs: every solver on every instance with every seed, each for the same budget.</summary>
+public sealed record BenchSettings
+{
+    public required IReadOnlyList<string> Solvers { get; init; }
+    public int Seeds { get; init; } = 3;
+    public int FirstSeed { get; init; } = 1;
+    public double Seconds { get; init; } = 10;
+    public long? Iterations { get; init; }
+    public Objective? Objective { get; init; }
+
+    /// <summary>Runs at once; 1 keeps timings fair on a small machine.</summary>
+    public int Jobs { get; init; } = 1;
+}
