@@ -30,12 +30,14 @@ public static class RunReport
         byte[]? routes = null, schedule = null;
         if (evaluation.VehiclesUsed > 0 || evaluation.Unserved.Count > 0)
         {
-            routes = PlotFile.Save(RouteMap.Create(instance, evaluation), folder, RouteMap.FileStem, RouteMap.Size);
+            using var map = RouteMap.Create(instance, evaluation);
+            routes = PlotFile.Save(map, folder, RouteMap.FileStem, RouteMap.Size);
         }
 
         if (evaluation.VehiclesUsed > 0)
         {
-            schedule = PlotFile.Save(ScheduleChart.Create(instance, evaluation), folder, ScheduleChart.FileStem, ScheduleChart.SizeFor(ScheduleChart.Rows(evaluation)));
+            using var chart = ScheduleChart.Create(instance, evaluation);
+            schedule = PlotFile.Save(chart, folder, ScheduleChart.FileStem, ScheduleChart.SizeFor(ScheduleChart.Rows(evaluation)));
         }
 
         var input = new ReportInput(instance, evaluation, record, solvers, new ReportPictures(convergence, routes, schedule));
@@ -46,8 +48,16 @@ public static class RunReport
     public static byte[]? WriteConvergence(string folder) =>
         WriteConvergence(folder, Solvers(RunRecordFile.Read(Path.Combine(folder, RunRecordFile.FileName)), ReadTraces(folder)));
 
-    private static byte[]? WriteConvergence(string folder, IReadOnlyList<SolverRun> solvers) =>
-        solvers.Count == 0 ? null : PlotFile.Save(ConvergencePlot.Create(solvers), folder, ConvergencePlot.FileStem, ConvergencePlot.Size);
+    private static byte[]? WriteConvergence(string folder, IReadOnlyList<SolverRun> solvers)
+    {
+        if (solvers.Count == 0)
+        {
+            return null;
+        }
+
+        using var plot = ConvergencePlot.Create(solvers);
+        return PlotFile.Save(plot, folder, ConvergencePlot.FileStem, ConvergencePlot.Size);
+    }
 
     private static IReadOnlyDictionary<string, IReadOnlyList<TracePoint>> ReadTraces(string folder)
     {

@@ -27,19 +27,14 @@ public static class Advice
                 + "see what breaks below, then relax a rule, add a vehicle or give more time.";
         }
 
-        var parts = new List<string>();
+        var parts = new List<string> { $"Use the plan from {chosen.Solver} (objective {Money(chosen.Objective)})" };
         var fastest = Fastest(input.Solvers, chosen.Objective);
         if (fastest is { } f)
         {
             double gap = Math.Abs(chosen.Objective) > 1e-12 ? Math.Max(0, (f.Value - chosen.Objective) / Math.Abs(chosen.Objective) * 100) : 0;
             parts.Add(gap < 0.005
-                ? $"{f.Run.Solver} found the best plan (objective {Money(chosen.Objective)}) in {Seconds(f.Seconds)}"
+                ? $"{f.Run.Solver} found it in {Seconds(f.Seconds)}"
                 : $"{f.Run.Solver} reached within {Percent(gap)} of the best in {Seconds(f.Seconds)}");
-        }
-
-        if (fastest is null || fastest.Value.Run.Solver != chosen.Solver)
-        {
-            parts.Add($"the plan written is {chosen.Solver}'s (objective {Money(chosen.Objective)})");
         }
 
         var bound = ConvergencePlot.Bound(input.Solvers);
@@ -54,8 +49,7 @@ public static class Advice
             parts.Add("no solver proved a lower bound, so how far it is from optimal is not known");
         }
 
-        string line = string.Join("; ", parts) + ".";
-        return char.ToUpperInvariant(line[0]) + line[1..];
+        return string.Join("; ", parts) + ".";
     }
 
     /// <summary>The feasible solver that first came within 1% of the best plan, when and at what value.</summary>

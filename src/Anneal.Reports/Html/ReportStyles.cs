@@ -21,7 +21,8 @@ internal static class ReportStyles
         table { border-collapse: collapse; width: 100%; margin: 6px 0 10px; }
         th, td { text-align: left; padding: 4px 8px; border-bottom: 1px solid var(--line); vertical-align: top; }
         th { background: var(--band); font-weight: 600; font-size: 13px; }
-        td.n, th.n { text-align: right; font-variant-numeric: tabular-nums; }
+        td.n, th.n { text-align: right; font-variant-numeric: tabular-nums; white-space: nowrap; }
+        #solver-table td:first-child { white-space: nowrap; }
         tr.chosen td { font-weight: bold; }
         tr.late td { background: #fbeeed; }
         figure { margin: 10px 0 18px; }

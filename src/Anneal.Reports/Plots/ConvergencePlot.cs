@@ -70,7 +70,11 @@ public static class ConvergencePlot
             lo = Math.Min(lo, b.Value);
         }
 
-        plot.Add.Annotation(Note(solvers, bound), Alignment.UpperRight);
+        var note = plot.Add.Annotation(Note(solvers, bound), Alignment.UpperRight);
+        note.LabelStyle.BackgroundColor = Colors.White;
+        note.LabelStyle.BorderColor = Colors.Gray;
+        note.LabelStyle.ShadowColor = Colors.Transparent;
+        note.LabelStyle.FontSize = 13;
         plot.Axes.Bottom.TickGenerator = new NumericAutomatic
         {
             MinorTickGenerator = new LogMinorTickGenerator(),

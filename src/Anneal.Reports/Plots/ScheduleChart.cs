@@ -1,5 +1,6 @@
 using Anneal.Core.Evaluation;
 using Anneal.Core.Model;
+using Anneal.Formats.Output;
 using ScottPlot;
 using ScottPlot.TickGenerators;
 
@@ -46,7 +47,7 @@ public static class ScheduleChart
             bars.Add(Span(y, v.ShiftStart, shiftEnd, 0.8, Colors.LightGray.WithAlpha(0.45)));
             from = Math.Min(from, Math.Min(v.ShiftStart, m.Departure));
             to = Math.Max(to, Math.Max(shiftEnd, m.Return));
-            AddRoute(instance, route, y, bars);
+            AddRoute(instance, route, y, bars, Math.Max(1e-9, (m.Return - v.ShiftStart) * 0.003));
             if (m.Overtime > Tolerance && double.IsFinite(v.ShiftEnd))
             {
                 bars.Add(Span(y - 0.33, v.ShiftEnd, m.Return, 0.12, Palette.Late));
@@ -64,13 +65,14 @@ public static class ScheduleChart
             plot.Axes.Bottom.TickGenerator = ClockTicks.For(instance, from, to);
         }
 
-        plot.Axes.SetLimitsY(-row + 0.4, 0.7);
+        plot.Axes.SetLimitsY(-row + 0.45, 0.6);
         plot.XLabel(instance.TimeUnit == "min" ? "time of day" : "time");
         Legend(plot);
         return plot;
     }
 
-    private static void AddRoute(Instance instance, RouteEvaluation route, double y, List<Bar> bars)
+    /// <param name="tick">Width of a window's end marks, in time units.</param>
+    private static void AddRoute(Instance instance, RouteEvaluation route, double y, List<Bar> bars, double tick)
     {
         double t = route.Metrics.Departure;
         for (int k = 0; k < route.Stops.Length; k++)
@@ -90,13 +92,14 @@ public static class ScheduleChart
                 bars.Add(Span(y, visit.Arrival - visit.Late, visit.Arrival, BarSize * 0.45, Palette.Late));
             }
 
-            double lane = y + (k % 2 == 0 ? 0.31 : 0.39);
-            foreach (var w in stop.Windows)
+            // The window served in, with end marks so that neighbouring windows stay apart; three lanes in turn.
+            var w = RoutesCsvWriter.WindowUsed(stop, visit.Arrival);
+            if (double.IsFinite(w.Open) && double.IsFinite(w.Close))
             {
-                if (double.IsFinite(w.Open) && double.IsFinite(w.Close))
-                {
-                    bars.Add(Span(lane, w.Open, w.Close, 0.05, Palette.Window));
-                }
+                double lane = y + 0.3 + (0.07 * (k % 3));
+                bars.Add(Span(lane, w.Open, w.Close, 0.02, Palette.Window.WithAlpha(0.7)));
+                bars.Add(Span(lane, w.Open, w.Open + tick, 0.07, Palette.Window));
+                bars.Add(Span(lane, w.Close - tick, w.Close, 0.07, Palette.Window));
             }
 
             t = visit.Departure;
