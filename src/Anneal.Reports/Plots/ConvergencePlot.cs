@@ -1,7 +1,6 @@
 using System.Globalization;
 using Anneal.Reports.Traces;
 using ScottPlot;
-using ScottPlot.TickGenerators;
 
 namespace Anneal.Reports.Plots;
 
@@ -75,12 +74,7 @@ public static class ConvergencePlot
         note.LabelStyle.BorderColor = Colors.Gray;
         note.LabelStyle.ShadowColor = Colors.Transparent;
         note.LabelStyle.FontSize = 13;
-        plot.Axes.Bottom.TickGenerator = new NumericAutomatic
-        {
-            MinorTickGenerator = new LogMinorTickGenerator(),
-            IntegerTicksOnly = true,
-            LabelFormatter = x => Seconds(Math.Pow(10, x)),
-        };
+        plot.Axes.Bottom.TickGenerator = LogSecondsTicks.Create();
         if (double.IsFinite(lo) && double.IsFinite(hi))
         {
             double pad = Math.Max((hi - lo) * 0.08, Math.Max(Math.Abs(lo) * 0.002, 1e-6));
@@ -163,8 +157,4 @@ public static class ConvergencePlot
         double? gap = TraceFacts.GapPercent(best.Objective, b.Value);
         return head + string.Create(CultureInfo.InvariantCulture, $"\nlower bound {b.Value:0.##} ({b.Solver})\ngap at most {gap:0.0#}%");
     }
-
-    private static string Seconds(double s) => s >= 1
-        ? s.ToString("0", CultureInfo.InvariantCulture) + " s"
-        : s.ToString("0.###", CultureInfo.InvariantCulture) + " s";
 }

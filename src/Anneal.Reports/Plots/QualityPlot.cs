@@ -1,7 +1,5 @@
-using System.Globalization;
 using Anneal.Reports.Quality;
 using ScottPlot;
-using ScottPlot.TickGenerators;
 
 namespace Anneal.Reports.Plots;
 
@@ -49,12 +47,7 @@ public static class QualityPlot
         }
 
         plot.Add.HorizontalLine(0, 1, Colors.Gray, LinePattern.Dashed);
-        plot.Axes.Bottom.TickGenerator = new NumericAutomatic
-        {
-            MinorTickGenerator = new LogMinorTickGenerator(),
-            IntegerTicksOnly = true,
-            LabelFormatter = x => Math.Pow(10, x).ToString(x >= 0 ? "0" : "0.###", CultureInfo.InvariantCulture) + " s",
-        };
+        plot.Axes.Bottom.TickGenerator = LogSecondsTicks.Create();
         plot.ShowLegend();
         return plot;
     }
