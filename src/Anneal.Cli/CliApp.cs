@@ -67,6 +67,7 @@ public static class CliApp
         root.Subcommands.Add(EvaluateCommand.Create(context));
         root.Subcommands.Add(SolveCommand.Create(context));
         root.Subcommands.Add(BenchCommand.Create(context));
+        root.Subcommands.Add(PlotCommand.Create(context));
         return root;
     }
 }

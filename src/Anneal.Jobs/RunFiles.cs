@@ -2,11 +2,16 @@ using Anneal.Core.Evaluation;
 using Anneal.Core.Model;
 using Anneal.Formats.Input;
 using Anneal.Formats.Output;
+using Anneal.Reports;
+using Anneal.Reports.Runs;
 using Anneal.Search.Running;
 
 namespace Anneal.Jobs;
 
-/// <summary>Writes a run's files into its output folder: routes.csv, summary.json and (after a search) trace.csv.</summary>
+/// <summary>
+/// Writes a run's files into its output folder: routes.csv, summary.json, (after a search) trace.csv, run.json (what
+/// `anneal plot` needs to redraw), then the pictures and report.html drawn from those files.
+/// </summary>
 public static class RunFiles
 {
     /// <summary>What the summary says about the run besides the plan.</summary>
@@ -15,12 +20,29 @@ public static class RunFiles
     public static void Write(string folder, LoadedInput input, Instance instance, PlanEvaluation plan, RunOutcome? outcome, RunFacts facts)
     {
         RoutesCsvWriter.Write(Path.Combine(folder, RoutesCsvWriter.FileName), instance, plan);
-        SummaryJsonWriter.Write(Path.Combine(folder, SummaryJsonWriter.FileName), Summary(input, instance, plan, outcome, facts));
+        var summary = Summary(input, instance, plan, outcome, facts);
+        SummaryJsonWriter.Write(Path.Combine(folder, SummaryJsonWriter.FileName), summary);
         if (outcome is not null)
         {
             TraceCsvWriter.Write(Path.Combine(folder, TraceCsvWriter.FileName), Trace(outcome));
         }
+
+        RunRecordFile.Write(Path.Combine(folder, RunRecordFile.FileName), Record(input, instance, plan, summary));
+        RunReport.Write(folder, instance, plan);
     }
+
+    public static RunRecord Record(LoadedInput input, Instance instance, PlanEvaluation plan, SummaryDocument summary) => new(
+        RunRecord.CurrentVersion,
+        Path.GetFullPath(input.Path),
+        input.Format,
+        instance.Objective.ToText(),
+        RunRecordFile.Routes(instance, plan),
+        summary.Solvers,
+        summary.Chosen,
+        summary.Seed,
+        summary.TimeLimitSeconds,
+        summary.Interrupted,
+        summary.GeneratedAt);
 
     public static SummaryDocument Summary(LoadedInput input, Instance instance, PlanEvaluation plan, RunOutcome? outcome, RunFacts facts)
     {

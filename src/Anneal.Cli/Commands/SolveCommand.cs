@@ -101,7 +101,7 @@ public static class SolveCommand
 
         using var stop = CancellationTokenSource.CreateLinkedTokenSource(context.Cancel);
         using var signals = context.HandleSignals ? new ShutdownSignals(stop) : null;
-        var progress = request.Quiet ? null : new ProgressReporter(context.Err, context.ProgressIsTerminal);
+        var progress = request.Quiet ? null : new ProgressReporter(context.Err, context.ProgressIsTerminal, options.TimeLimit);
         var outcome = RunCoordinator.Run(instance, names, options, progress is null ? null : progress.Report, stop.Token);
         progress?.Finish();
         bool interrupted = stop.IsCancellationRequested;

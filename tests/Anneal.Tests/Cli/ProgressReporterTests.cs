@@ -25,16 +25,21 @@ public sealed class ProgressReporterTests
     }
 
     [Fact]
-    public void On_a_terminal_the_status_line_is_redrawn_in_place_and_ended_once()
+    public void On_a_terminal_the_table_is_redrawn_in_place_with_one_row_per_solver()
     {
         var writer = new StringWriter();
-        var progress = new ProgressReporter(writer, terminal: true);
+        var progress = new ProgressReporter(writer, terminal: true, TimeSpan.FromSeconds(30));
         progress.Report("sa", new TracePoint(0.1, 1, 50, 50, true, string.Empty));
+        progress.Report("tabu", new TracePoint(0.1, 1, 60, 60, false, string.Empty));
         progress.Finish();
 
         string text = writer.ToString();
-        Assert.StartsWith("\r", text, StringComparison.Ordinal);
-        Assert.Single(text.Split('\n', StringSplitOptions.RemoveEmptyEntries));
-        Assert.EndsWith(Environment.NewLine, text, StringComparison.Ordinal);
+        var table = progress.Table();
+        Assert.Equal(3, table.Count); // header, sa, tabu
+        Assert.Contains("left", table[0], StringComparison.Ordinal);
+        Assert.Contains("50.00", table[1], StringComparison.Ordinal);
+        Assert.Contains(" no ", table[2], StringComparison.Ordinal);
+        Assert.Contains("\u001b[2F", text, StringComparison.Ordinal); // the second draw moves up over the two lines of the first
+        Assert.EndsWith("\n", text, StringComparison.Ordinal);
     }
 }

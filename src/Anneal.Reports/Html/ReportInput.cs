@@ -1,0 +1,30 @@
+using Anneal.Core.Evaluation;
+using Anneal.Core.Model;
+using Anneal.Reports.Runs;
+using Anneal.Reports.Traces;
+
+namespace Anneal.Reports.Html;
+
+/// <summary>Everything report.html shows; all of it comes from the run folder and the re-read input, so `anneal plot` can rebuild it.</summary>
+public sealed record ReportInput(Instance Instance, PlanEvaluation Plan, RunRecord Run, IReadOnlyList<SolverRun> Solvers, ReportPictures Pictures)
+{
+    /// <summary>The solver whose plan was written, if the run searched.</summary>
+    public SolverRun? Chosen
+    {
+        get
+        {
+            foreach (var s in Solvers)
+            {
+                if (s.Solver == Run.Chosen)
+                {
+                    return s;
+                }
+            }
+
+            return null;
+        }
+    }
+
+    /// <summary>Kilometres for CSV jobs; benchmark files have unitless distance.</summary>
+    public string DistanceUnit => Run.Format == "csv-job" ? " km" : string.Empty;
+}

@@ -1,0 +1,106 @@
+using System.Text;
+using Anneal.Core.Evaluation;
+using Anneal.Core.Model;
+using Anneal.Formats.Output;
+using static Anneal.Reports.Html.Text;
+
+namespace Anneal.Reports.Html;
+
+/// <summary>One sheet per vehicle used, to hand to its driver: the stops in order with arrival, window, load on board and minutes late.</summary>
+internal static class RouteSheets
+{
+    public static void Write(StringBuilder h, ReportInput input)
+    {
+        var instance = input.Instance;
+        bool any = false;
+        foreach (var route in input.Plan.Routes)
+        {
+            if (route.Stops.Length == 0)
+            {
+                continue;
+            }
+
+            any = true;
+            Sheet(h, input, instance, route);
+        }
+
+        if (!any)
+        {
+            h.Append("<p class=\"none\">No vehicle leaves the depot in this plan.</p>");
+        }
+    }
+
+    private static void Sheet(StringBuilder h, ReportInput input, Instance instance, RouteEvaluation route)
+    {
+        var v = instance.Vehicles[route.Vehicle];
+        var m = route.Metrics;
+        string unit = instance.TimeUnit == "min" ? "min" : "time units";
+        h.Append("<section class=\"sheet\" data-vehicle=\"").Append(E(v.Id)).Append("\"><h3>Vehicle ").Append(E(v.Id)).Append("</h3>")
+            .Append("<p class=\"sum\">").Append(route.Stops.Length).Append(" stops · leaves ").Append(E(instance.Depots[v.StartDepot].Id))
+            .Append(" at ").Append(TimeText.Clock(instance, m.Departure)).Append(" · back at ").Append(E(instance.Depots[v.EndDepot].Id))
+            .Append(' ').Append(TimeText.Clock(instance, m.Return)).Append(" · ").Append(Num(m.Distance, "0.0")).Append(E(input.DistanceUnit))
+            .Append(" · loaded ").Append(E(Load(instance, StartLoad(instance, route))))
+            .Append(" · route objective ").Append(Money(route.Objective));
+        if (m.Overtime > CostModel.FeasibilityTolerance)
+        {
+            h.Append(" · <span class=\"bad\">").Append(Num(m.Overtime, "0")).Append(' ').Append(unit).Append(" over the shift end</span>");
+        }
+
+        h.Append("</p><table><thead><tr><th class=\"n\">#</th><th>stop</th><th class=\"n\">arrival</th><th>window</th><th class=\"n\">service</th>")
+            .Append("<th class=\"n\">leaves</th><th>load on board after</th><th class=\"n\">").Append(unit).Append(" late</th></tr></thead><tbody>");
+        for (int k = 0; k < route.Stops.Length; k++)
+        {
+            var stop = instance.Stops[route.Stops[k]];
+            var visit = route.Visits[k];
+            bool late = visit.Late > CostModel.FeasibilityTolerance;
+            h.Append(late ? "<tr class=\"late\">" : "<tr>")
+                .Append("<td class=\"n\">").Append(k + 1).Append("</td>")
+                .Append("<td>").Append(E(stop.Id)).Append("</td>")
+                .Append("<td class=\"n\">").Append(TimeText.Clock(instance, visit.Arrival)).Append("</td>")
+                .Append("<td>").Append(E(Windows(instance, stop))).Append("</td>")
+                .Append("<td class=\"n\">").Append(TimeText.Clock(instance, visit.Start)).Append("</td>")
+                .Append("<td class=\"n\">").Append(TimeText.Clock(instance, visit.Departure)).Append("</td>")
+                .Append("<td>").Append(E(Load(instance, route.LoadAfter[k]))).Append("</td>")
+                .Append("<td class=\"n\">").Append(late ? Num(visit.Late, "0.#") : string.Empty).Append("</td></tr>");
+        }
+
+        h.Append("</tbody></table></section>");
+    }
+
+    private static string Windows(Instance instance, Stop stop)
+    {
+        var parts = new List<string>(stop.Windows.Length);
+        foreach (var w in stop.Windows)
+        {
+            parts.Add(TimeText.Window(instance, w));
+        }
+
+        return string.Join(", ", parts);
+    }
+
+    private static double[] StartLoad(Instance instance, RouteEvaluation route)
+    {
+        var load = new double[instance.DimensionCount];
+        foreach (int s in route.Stops)
+        {
+            for (int d = 0; d < load.Length; d++)
+            {
+                load[d] += instance.Demand(s, d);
+            }
+        }
+
+        return load;
+    }
+
+    private static string Load(Instance instance, double[] load)
+    {
+        var parts = new List<string>(load.Length);
+        for (int d = 0; d < load.Length; d++)
+        {
+            string name = d < instance.DimensionNames.Count ? instance.DimensionNames[d] : string.Empty;
+            parts.Add((TimeText.Amount(load[d]) + " " + name).Trim());
+        }
+
+        return string.Join(" · ", parts);
+    }
+}

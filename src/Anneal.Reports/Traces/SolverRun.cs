@@ -1,0 +1,18 @@
+using Anneal.Search.Running;
+
+namespace Anneal.Reports.Traces;
+
+/// <summary>One solver's part in a run, as the pictures and the report need it: the judged result and its convergence.</summary>
+/// <param name="Objective">The evaluator's objective of the solver's final plan.</param>
+public sealed record SolverRun(
+    string Solver,
+    double Objective,
+    bool Feasible,
+    int Vehicles,
+    double Distance,
+    double Seconds,
+    double SecondsToBest,
+    string Status,
+    double? LowerBound,
+    IReadOnlyList<string> Notes,
+    IReadOnlyList<TracePoint> Trace);
