@@ -29,7 +29,7 @@ public sealed class ExactModel
     public ExactModel(Instance instance)
     {
         _instance = instance;
-        Scale = new IntegerScale(instance);
+        Scale = ExactScale(instance);
         _classes = VehicleClass.Group(instance);
         int n = instance.StopCount;
         _arc = new ILiteral?[_classes.Count][,];
@@ -241,16 +241,8 @@ public sealed class ExactModel
         var back = time[i] + transit;
         if (!double.IsPositiveInfinity(v.ShiftEnd))
         {
-            if (rules.ShiftEnd.Hard)
-            {
-                Model.Add(back <= Scale.TimeDown(v.ShiftEnd)).OnlyEnforceIf(x);
-            }
-            else
-            {
-                var over = Model.NewIntVar(0, Scale.Horizon, $"c{c}.overtime{i}");
-                Model.Add(over >= back - Scale.TimeNearest(v.ShiftEnd)).OnlyEnforceIf(x);
-                _objective.AddTerm(over, Scale.PerTimeStep(rules.ShiftEnd.Price, "overtime price"));
-            }
+            Limit(back, x, rules.ShiftEnd, Scale.TimeDown(v.ShiftEnd), Scale.TimeNearest(v.ShiftEnd), Scale.Horizon,
+                Scale.PerTimeStep(rules.ShiftEnd.Price, "overtime price"), $"c{c}.overtime{i}");
         }
 
         for (int d = 0; d < inst.DimensionCount; d++)
@@ -261,16 +253,8 @@ public sealed class ExactModel
                 continue;
             }
 
-            if (rules.Capacity.Hard)
-            {
-                Model.Add(load[i, d] <= Scale.CapacityDown(cap)).OnlyEnforceIf(x);
-            }
-            else
-            {
-                var over = Model.NewIntVar(0, TotalDemand(d), $"c{c}.overload{i}.{d}");
-                Model.Add(over >= load[i, d] - Scale.LoadNearest(cap)).OnlyEnforceIf(x);
-                _objective.AddTerm(over, Scale.PerLoadStep(rules.Capacity.Price, "overload price"));
-            }
+            Limit(load[i, d], x, rules.Capacity, Scale.CapacityDown(cap), Scale.LoadNearest(cap), TotalDemand(d),
+                Scale.PerLoadStep(rules.Capacity.Price, "overload price"), $"c{c}.overload{i}.{d}");
         }
 
         if (!durationMatters)
@@ -288,18 +272,69 @@ public sealed class ExactModel
 
         if (!double.IsPositiveInfinity(v.MaxDuration))
         {
-            if (rules.MaxDuration.Hard)
-            {
-                Model.Add(duration <= Scale.DurationDown(v.MaxDuration)).OnlyEnforceIf(x);
-            }
-            else
-            {
-                var excess = Model.NewIntVar(0, Scale.Horizon, $"c{c}.excess{i}");
-                Model.Add(excess >= duration - Scale.DurationNearest(v.MaxDuration)).OnlyEnforceIf(x);
-                _objective.AddTerm(excess, Scale.PerTimeStep(rules.MaxDuration.Price, "price per time over the maximum duration"));
-            }
+            Limit(duration, x, rules.MaxDuration, Scale.DurationDown(v.MaxDuration), Scale.DurationNearest(v.MaxDuration), Scale.Horizon,
+                Scale.PerTimeStep(rules.MaxDuration.Price, "price per time over the maximum duration"), $"c{c}.excess{i}");
         }
     }
+
+    /// <summary>When <paramref name="x"/> holds: value ≤ the hard bound, or the excess over the soft bound is priced.</summary>
+    private void Limit(LinearExpr value, ILiteral x, Rule rule, long hardBound, long softBound, long maxExcess, long price, string name)
+    {
+        if (rule.Hard)
+        {
+            Model.Add(value <= hardBound).OnlyEnforceIf(x);
+            return;
+        }
+
+        var excess = Model.NewIntVar(0, maxExcess, name);
+        Model.Add(excess >= value - softBound).OnlyEnforceIf(x);
+        _objective.AddTerm(excess, price);
+    }
+
+    /// <summary>
+    /// CP-SAT proves far faster with small numbers: one step per unit when every time (or load) of the instance is
+    /// whole, else 100 steps; cost steps 1000 per time step, so a price per time unit keeps three digits.
+    /// Integer data is then exact.
+    /// </summary>
+    private static IntegerScale ExactScale(Instance instance)
+    {
+        bool wholeTimes = true, wholeLoads = true;
+        foreach (var s in instance.Stops)
+        {
+            wholeTimes &= Whole(s.ServiceTime);
+            foreach (var w in s.Windows)
+            {
+                wholeTimes &= Whole(w.Open) && Whole(w.Close);
+            }
+
+            foreach (double q in s.Demand)
+            {
+                wholeLoads &= Whole(q);
+            }
+        }
+
+        foreach (var v in instance.Vehicles)
+        {
+            wholeTimes &= Whole(v.ShiftStart) && Whole(v.ShiftEnd) && Whole(v.MaxDuration);
+            foreach (double q in v.Capacity)
+            {
+                wholeLoads &= Whole(q);
+            }
+        }
+
+        for (int a = 0; a < instance.Travel.Count && wholeTimes; a++)
+        {
+            for (int b = 0; b < instance.Travel.Count; b++)
+            {
+                wholeTimes &= Whole(instance.Travel.Duration(a, b));
+            }
+        }
+
+        double timeSteps = wholeTimes ? 1 : 100;
+        return new IntegerScale(instance, timeSteps, wholeLoads ? 1 : 100, maxCostScale: 1000 * timeSteps);
+    }
+
+    private static bool Whole(double x) => double.IsInfinity(x) || Math.Abs(x - Math.Round(x)) < 1e-9;
 
     /// <summary>Hard: the windows themselves. Soft: the same, the last one open to the horizon (lateness is priced).</summary>
     private Domain WindowDomain(int stop)

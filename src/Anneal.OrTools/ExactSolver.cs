@@ -59,7 +59,7 @@ public sealed class ExactSolver : ISolver
             case CpSolverStatus.Optimal:
                 result = "optimal";
                 lowerBound = exact.Scale.ToObjective(solver.BestObjectiveBound);
-                notes.Add("proven optimal for the integer model (times and loads in steps of 1/1000)");
+                notes.Add(string.Create(CultureInfo.InvariantCulture, $"proven optimal for the integer model ({exact.Scale.TimeScale} steps per time unit, {exact.Scale.CostScale} per cost unit)"));
                 break;
             case CpSolverStatus.Feasible:
                 result = cancel.IsCancellationRequested ? "interrupted" : "time limit";
