@@ -62,6 +62,7 @@ public static class CliApp
 
     public static RootCommand BuildRoot(CliContext context)
     {
+        OrTools.OrToolsSolvers.Register();
         var root = new RootCommand("Anneal plans delivery routes under hard and soft rules (vehicle routing with capacities and time windows).");
         root.Subcommands.Add(CheckCommand.Create(context));
         root.Subcommands.Add(EvaluateCommand.Create(context));

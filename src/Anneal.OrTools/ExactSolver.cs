@@ -1,0 +1,109 @@
+using System.Diagnostics;
+using System.Globalization;
+using Anneal.Core.Evaluation;
+using Anneal.Core.Model;
+using Anneal.Core.Plans;
+using Anneal.Search.Running;
+using Anneal.Search.Strategy;
+using Google.OrTools.Sat;
+
+namespace Anneal.OrTools;
+
+/// <summary>
+/// CP-SAT on <see cref="ExactModel"/> for small instances: a proven optimum, or when time runs out the best plan
+/// with the proven lower bound and the gap. Declines above its stop limit.
+/// </summary>
+public sealed class ExactSolver : ISolver
+{
+    private readonly ExactSettings _settings;
+
+    public ExactSolver(ExactSettings? settings = null)
+    {
+        _settings = settings ?? new ExactSettings();
+    }
+
+    public string Name => "exact";
+
+    public SolverResult Solve(Instance instance, SolveOptions options, IProgress<TracePoint>? progress, CancellationToken cancel)
+    {
+        var clock = Stopwatch.StartNew();
+        if (instance.StopCount > _settings.StopLimit)
+        {
+            return new SolverResult(Name, Plan.Empty, 0, 0, [], $"not applicable: {instance.StopCount} stops > {_settings.StopLimit}");
+        }
+
+        var exact = new ExactModel(instance);
+        var trace = new TraceRecorder(progress, options.TimeLimit.TotalSeconds);
+        var keeper = new Keeper(instance, exact, trace, clock);
+        var solver = new CpSolver();
+        double seconds = Math.Max(0.01, (options.TimeLimit - clock.Elapsed).TotalSeconds);
+        int workers = Math.Max(1, _settings.Workers ?? options.Threads);
+        solver.StringParameters = string.Create(CultureInfo.InvariantCulture,
+            $"max_time_in_seconds:{seconds} num_workers:{workers} random_seed:{options.Seed}");
+        CpSolverStatus status;
+        using (cancel.Register(solver.StopSearch))
+        {
+            status = solver.Solve(exact.Model, keeper);
+        }
+
+        if (status is CpSolverStatus.Optimal or CpSolverStatus.Feasible)
+        {
+            keeper.Offer(exact.Decode(solver.BooleanValue), "final");
+        }
+
+        var notes = new List<string>(exact.Notes);
+        double? lowerBound = null;
+        string result;
+        switch (status)
+        {
+            case CpSolverStatus.Optimal:
+                result = "optimal";
+                lowerBound = exact.Scale.ToObjective(solver.BestObjectiveBound);
+                notes.Add(string.Create(CultureInfo.InvariantCulture, $"proven optimal for the integer model ({exact.Scale.TimeScale} steps per time unit, {exact.Scale.CostScale} per cost unit)"));
+                break;
+            case CpSolverStatus.Feasible:
+                result = cancel.IsCancellationRequested ? "interrupted" : "time limit";
+                lowerBound = exact.Scale.ToObjective(solver.BestObjectiveBound);
+                double objective = exact.Scale.ToObjective(solver.ObjectiveValue);
+                double gap = objective > 0 ? (objective - lowerBound.Value) / objective : 0;
+                notes.Add(string.Create(CultureInfo.InvariantCulture, $"not proven optimal: lower bound {lowerBound:0.###}, gap {gap:P2}"));
+                break;
+            default:
+                result = cancel.IsCancellationRequested ? "interrupted" : $"no solution ({status.ToString().ToLowerInvariant()})";
+                break;
+        }
+
+        double total = clock.Elapsed.TotalSeconds;
+        if (keeper.Best is { } best)
+        {
+            trace.Finish(new TracePoint(total, keeper.Solutions, best.Objective, best.Objective, best.Feasible, result));
+        }
+
+        return new SolverResult(Name, keeper.BestPlan, total, trace.SecondsToBest, trace.Points, result, lowerBound, notes);
+    }
+
+    /// <summary>Judges every CP-SAT solution with Anneal's evaluator and traces the improvements.</summary>
+    private sealed class Keeper(Instance instance, ExactModel exact, TraceRecorder trace, Stopwatch clock) : CpSolverSolutionCallback
+    {
+        public PlanEvaluation? Best { get; private set; }
+        public Plan BestPlan { get; private set; } = Plan.Empty;
+        public long Solutions { get; private set; }
+
+        public override void OnSolutionCallback()
+        {
+            Solutions++;
+            Offer(exact.Decode(BooleanValue), "CP-SAT");
+        }
+
+        public void Offer(Plan plan, string state)
+        {
+            var judged = PlanEvaluator.Evaluate(instance, plan);
+            if (Best is null || judged.IsBetterThan(Best))
+            {
+                Best = judged;
+                BestPlan = plan;
+                trace.Improved(new TracePoint(clock.Elapsed.TotalSeconds, Solutions, judged.Objective, judged.Objective, judged.Feasible, state));
+            }
+        }
+    }
+}

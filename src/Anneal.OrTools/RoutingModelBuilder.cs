@@ -1,0 +1,261 @@
+using Anneal.Core.Model;
+using Google.OrTools.ConstraintSolver;
+
+namespace Anneal.OrTools;
+
+/// <summary>
+/// Maps an Anneal instance onto an OR-Tools routing model: every rule either exactly (up to
+/// <see cref="IntegerScale"/>) or with an "approximated: ..." note — never silently dropped.
+/// </summary>
+public static class RoutingModelBuilder
+{
+    public const string TimeDimension = "time";
+
+    public static RoutingMapping Build(Instance instance)
+    {
+        var scale = new IntegerScale(instance);
+        var notes = new List<string>(ScheduleApproximations.For(instance));
+        int n = instance.StopCount;
+        var nodeLocation = NodeLocations(instance);
+        int vehicles = instance.Vehicles.Count;
+        var starts = new int[vehicles];
+        var ends = new int[vehicles];
+        for (int v = 0; v < vehicles; v++)
+        {
+            starts[v] = Array.IndexOf(nodeLocation, instance.DepotLocation(instance.Vehicles[v].StartDepot));
+            ends[v] = Array.IndexOf(nodeLocation, instance.DepotLocation(instance.Vehicles[v].EndDepot));
+        }
+
+        var manager = new RoutingIndexManager(nodeLocation.Length, vehicles, starts, ends);
+        var model = new RoutingModel(manager);
+        ArcCosts(instance, scale, model, nodeLocation);
+        Time(instance, scale, model, manager, nodeLocation);
+        Loads(instance, scale, model, nodeLocation);
+        for (int v = 0; v < vehicles; v++)
+        {
+            double fixedCost = instance.Objective switch
+            {
+                Objective.Cost => instance.Vehicles[v].FixedCost,
+                Objective.VehiclesThenDistance => instance.VehicleWeight,
+                _ => 0,
+            };
+            model.SetFixedCostOfVehicle(scale.Cost(fixedCost), v);
+        }
+
+        Visits(instance, scale, model, manager, notes);
+        notes.AddRange(scale.Notes);
+        return new RoutingMapping(instance, scale, manager, model, notes);
+    }
+
+    /// <summary>Stops, then each depot some vehicle starts or ends at.</summary>
+    private static int[] NodeLocations(Instance instance)
+    {
+        var nodes = new List<int>();
+        for (int s = 0; s < instance.StopCount; s++)
+        {
+            nodes.Add(s);
+        }
+
+        for (int d = 0; d < instance.Depots.Count; d++)
+        {
+            bool used = false;
+            foreach (var v in instance.Vehicles)
+            {
+                used |= v.StartDepot == d || v.EndDepot == d;
+            }
+
+            if (used)
+            {
+                nodes.Add(instance.DepotLocation(d));
+            }
+        }
+
+        return nodes.ToArray();
+    }
+
+    /// <summary>Arc cost = distance × the vehicle's price per distance (1 outside the cost objective); one matrix per distinct price.</summary>
+    private static void ArcCosts(Instance instance, IntegerScale scale, RoutingModel model, int[] nodeLocation)
+    {
+        var byRate = new Dictionary<double, int>();
+        for (int v = 0; v < instance.Vehicles.Count; v++)
+        {
+            double rate = instance.Objective == Objective.Cost ? instance.Vehicles[v].CostPerDistance : 1;
+            if (!byRate.TryGetValue(rate, out int callback))
+            {
+                var m = Matrix(nodeLocation, (a, b) =>
+                    a >= instance.StopCount && b >= instance.StopCount ? 0 : scale.Cost(instance.Travel.Distance(a, b) * rate));
+                callback = model.RegisterTransitMatrix(m);
+                byRate[rate] = callback;
+            }
+
+            model.SetArcCostEvaluatorOfVehicle(callback, v);
+        }
+    }
+
+    /// <summary>Service start times: shifts, windows (hard ranges or soft upper bounds), per-hour cost, maximum duration.</summary>
+    private static void Time(Instance instance, IntegerScale scale, RoutingModel model, RoutingIndexManager manager, int[] nodeLocation)
+    {
+        int callback = model.RegisterTransitMatrix(Matrix(nodeLocation, scale.Transit));
+        model.AddDimension(callback, scale.Horizon, scale.Horizon, false, TimeDimension);
+        var time = model.GetMutableDimension(TimeDimension);
+        var rules = instance.Rules;
+        for (int v = 0; v < instance.Vehicles.Count; v++)
+        {
+            var vehicle = instance.Vehicles[v];
+            long start = scale.TimeUp(vehicle.ShiftStart);
+            long latest = rules.ShiftEnd.Hard ? scale.TimeDown(vehicle.ShiftEnd) : scale.Horizon;
+            time.CumulVar(model.Start(v)).SetRange(start, Math.Max(start, latest));
+            if (!double.IsPositiveInfinity(vehicle.ShiftEnd))
+            {
+                if (rules.ShiftEnd.Hard)
+                {
+                    time.CumulVar(model.End(v)).SetMax(scale.TimeDown(vehicle.ShiftEnd));
+                }
+                else
+                {
+                    time.SetCumulVarSoftUpperBound(model.End(v), scale.TimeNearest(vehicle.ShiftEnd), scale.PerTimeStep(rules.ShiftEnd.Price, "overtime price"));
+                }
+            }
+
+            if (instance.Objective == Objective.Cost && vehicle.CostPerHour > 0)
+            {
+                time.SetSpanCostCoefficientForVehicle(scale.PerTimeStep(vehicle.CostPerHour / instance.TimeUnitsPerHour, "cost per hour"), v);
+            }
+
+            if (!double.IsPositiveInfinity(vehicle.MaxDuration))
+            {
+                if (rules.MaxDuration.Hard)
+                {
+                    time.SetSpanUpperBoundForVehicle(scale.DurationDown(vehicle.MaxDuration), v);
+                }
+                else
+                {
+                    time.SetSoftSpanUpperBoundForVehicle(new BoundCost(scale.DurationNearest(vehicle.MaxDuration), scale.PerTimeStep(rules.MaxDuration.Price, "price per time over the maximum duration")), v);
+                }
+            }
+        }
+
+        for (int s = 0; s < instance.StopCount; s++)
+        {
+            Windows(instance, scale, time, manager.NodeToIndex(s), instance.Stops[s].Windows);
+        }
+    }
+
+    /// <summary>
+    /// Hard: the hull of the windows as the cumul range, the gaps removed. Soft: the same from the first opening,
+    /// with lateness past the last close priced per time step (Anneal waits in a gap and is late only after the last window).
+    /// </summary>
+    private static void Windows(Instance instance, IntegerScale scale, RoutingDimension time, long index, TimeWindow[] windows)
+    {
+        var cumul = time.CumulVar(index);
+        bool hard = instance.Rules.TimeWindows.Hard;
+        long open = scale.TimeUp(windows[0].Open);
+        long close = hard ? scale.TimeDown(windows[^1].Close) : scale.Horizon;
+        cumul.SetRange(open, Math.Max(open, close));
+        for (int w = 0; w + 1 < windows.Length; w++)
+        {
+            long gapFrom = scale.TimeDown(windows[w].Close) + 1;
+            long gapTo = scale.TimeUp(windows[w + 1].Open) - 1;
+            if (gapFrom <= gapTo)
+            {
+                cumul.RemoveInterval(gapFrom, gapTo);
+            }
+        }
+
+        if (!hard && !double.IsPositiveInfinity(windows[^1].Close))
+        {
+            time.SetCumulVarSoftUpperBound(index, scale.TimeNearest(windows[^1].Close), scale.PerTimeStep(instance.Rules.TimeWindows.Price, "lateness price"));
+        }
+    }
+
+    /// <summary>One dimension per demand dimension; everything is loaded at the start, so the end cumul is the route's load.</summary>
+    private static void Loads(Instance instance, IntegerScale scale, RoutingModel model, int[] nodeLocation)
+    {
+        var rules = instance.Rules;
+        for (int d = 0; d < instance.DimensionCount; d++)
+        {
+            var demand = new long[nodeLocation.Length];
+            long total = 0;
+            for (int node = 0; node < instance.StopCount; node++)
+            {
+                demand[node] = scale.DemandUp(instance.Demand(node, d));
+                total += demand[node];
+            }
+
+            var capacity = new long[instance.Vehicles.Count];
+            for (int v = 0; v < capacity.Length; v++)
+            {
+                capacity[v] = rules.Capacity.Hard ? scale.CapacityDown(instance.Capacity(v, d)) : total + 1;
+            }
+
+            string name = "load " + instance.DimensionNames[d];
+            model.AddDimensionWithVehicleCapacity(model.RegisterUnaryTransitVector(demand), 0, capacity, true, name);
+            if (rules.Capacity.Hard)
+            {
+                continue;
+            }
+
+            var load = model.GetMutableDimension(name);
+            long price = scale.PerLoadStep(rules.Capacity.Price, "overload price");
+            for (int v = 0; v < capacity.Length; v++)
+            {
+                if (!double.IsPositiveInfinity(instance.Capacity(v, d)))
+                {
+                    load.SetCumulVarSoftUpperBound(model.End(v), scale.LoadNearest(instance.Capacity(v, d)), price);
+                }
+            }
+        }
+    }
+
+    /// <summary>Stops that may be left out become disjunctions with their penalty; skills restrict the vehicle variable.</summary>
+    private static void Visits(Instance instance, IntegerScale scale, RoutingModel model, RoutingIndexManager manager, List<string> notes)
+    {
+        for (int s = 0; s < instance.StopCount; s++)
+        {
+            long index = manager.NodeToIndex(s);
+            var allowed = new List<long> { -1 };
+            ulong needs = instance.Stops[s].RequiredSkills;
+            for (int v = 0; v < instance.Vehicles.Count; v++)
+            {
+                if ((needs & ~instance.Vehicles[v].Skills) == 0)
+                {
+                    allowed.Add(v);
+                }
+            }
+
+            bool noVehicle = allowed.Count == 1;
+            if (instance.MayDrop(s) || noVehicle)
+            {
+                model.AddDisjunction([index], scale.Cost(instance.UnservedPrice(s)));
+            }
+
+            if (noVehicle)
+            {
+                notes.Add($"stop {instance.Stops[s].Id} needs skills no vehicle has; it is left unserved");
+            }
+
+            // SetAllowedVehiclesForIndex takes an absl::Span the C# wrapper cannot build; restricting the vehicle
+            // variable is the same constraint (-1 = unserved, which disjunction-free stops exclude anyway).
+            if (allowed.Count <= instance.Vehicles.Count)
+            {
+                model.VehicleVar(index).SetValues(allowed.ToArray());
+            }
+        }
+    }
+
+    private static long[][] Matrix(int[] nodeLocation, Func<int, int, long> value)
+    {
+        int count = nodeLocation.Length;
+        var m = new long[count][];
+        for (int a = 0; a < count; a++)
+        {
+            m[a] = new long[count];
+            for (int b = 0; b < count; b++)
+            {
+                m[a][b] = a == b ? 0 : value(nodeLocation[a], nodeLocation[b]);
+            }
+        }
+
+        return m;
+    }
+}
