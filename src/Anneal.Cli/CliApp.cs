@@ -66,6 +66,7 @@ public static class CliApp
         root.Subcommands.Add(CheckCommand.Create(context));
         root.Subcommands.Add(EvaluateCommand.Create(context));
         root.Subcommands.Add(SolveCommand.Create(context));
+        root.Subcommands.Add(WorkerCommand.Create(context));
         return root;
     }
 }

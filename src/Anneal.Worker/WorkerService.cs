@@ -67,12 +67,12 @@ public sealed class WorkerService(IOptions<WorkerOptions> options, WorkerRun run
                     nextRecovery = now + TimeSpan.FromSeconds(o.RecoverSeconds);
                 }
 
+                running.RemoveAll(t => t.IsCompleted);
                 while (running.Count < o.ConcurrentJobs && !stop.IsCancellationRequested && claimer.TryClaimNext() is { } job)
                 {
                     running.Add(Start(job, processor, status, stop));
                 }
 
-                running.RemoveAll(t => t.IsCompleted);
                 if (now >= nextStatus)
                 {
                     status.Write("running", now);
