@@ -45,10 +45,11 @@ public static class WorkerCommand
     public static int Execute(IReadOnlyDictionary<string, string?> settings, bool once, CliContext context)
     {
         var run = new WorkerRun { Once = once };
-        using var host = WorkerHost.Build(settings, run);
-        using var outside = context.Cancel.Register(() => host.Services.GetRequiredService<IHostApplicationLifetime>().StopApplication());
         try
         {
+            // Building already reads the settings (the shutdown timeout is one of them), so it may refuse them too.
+            using var host = WorkerHost.Build(settings, run);
+            using var outside = context.Cancel.Register(() => host.Services.GetRequiredService<IHostApplicationLifetime>().StopApplication());
             host.Run();
         }
         catch (Exception e) when (Invalid(e) is { } invalid)
