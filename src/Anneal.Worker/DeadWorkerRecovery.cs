@@ -9,6 +9,8 @@ namespace Anneal.Worker;
 /// </summary>
 public sealed class DeadWorkerRecovery(WorkerFolders folders, string selfId, JobClaimer claimer, int maxRetries, ILogger log, TimeProvider clock)
 {
+    private static readonly TimeSpan StatusKept = TimeSpan.FromDays(1);
+
     /// <returns>How many jobs were handed on (requeued, failed or found already published).</returns>
     public int Run()
     {
@@ -50,7 +52,22 @@ public sealed class DeadWorkerRecovery(WorkerFolders folders, string selfId, Job
             }
         }
 
+        DropOldStatusFiles();
         return handled;
+    }
+
+    /// <summary>A stopped worker's last status stays readable for a day, then goes, so restarts do not pile files up.</summary>
+    private void DropOldStatusFiles()
+    {
+        var cutoff = clock.GetUtcNow() - StatusKept;
+        foreach (var path in Directory.GetFiles(folders.Working, "*" + StatusFile.Extension))
+        {
+            string id = Path.GetFileName(path)[..^StatusFile.Extension.Length];
+            if (!File.Exists(WorkerLock.PathFor(folders.Working, id)) && File.GetLastWriteTimeUtc(path) < cutoff)
+            {
+                Entries.TryDelete(path);
+            }
+        }
     }
 
     private int Recover(string deadId, string dir)

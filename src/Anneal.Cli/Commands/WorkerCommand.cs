@@ -61,6 +61,12 @@ public static class WorkerCommand
 
             return ExitCodes.InvalidInput;
         }
+        catch (InvalidOperationException e) when (e.Message.StartsWith("Failed to convert configuration value", StringComparison.Ordinal))
+        {
+            // The binder's own wording for a value of the wrong type (a word where a number or a choice belongs).
+            context.Err.WriteLine("anneal: invalid worker setting: " + e.Message);
+            return ExitCodes.InvalidInput;
+        }
 
         if (run.Failure is not null)
         {
