@@ -46,6 +46,40 @@ public sealed class WorkerPartsTests : TempFolderTest
     }
 
     [Fact]
+    public void A_zipped_job_folder_is_unpacked_beside_the_claim_and_its_folder_found()
+    {
+        string job = Path.Combine(Dir, "src", "week-12");
+        Directory.CreateDirectory(job);
+        File.WriteAllText(Path.Combine(job, "stops.csv"), "id\n");
+        string zip = Path.Combine(Dir, "week-12.zip");
+        System.IO.Compression.ZipFile.CreateFromDirectory(job, zip, System.IO.Compression.CompressionLevel.Fastest, includeBaseDirectory: true);
+
+        var claimed = new ClaimedJob(JobEntry.Parse("week-12.zip", isFolder: false), zip, DateTimeOffset.UnixEpoch);
+        string found = JobInput.Locate(claimed);
+        Assert.Equal(Path.Combine(JobInput.ScratchFor(claimed), "week-12"), found);
+        Assert.True(File.Exists(Path.Combine(found, "stops.csv")));
+    }
+
+    [Fact]
+    public void Publishing_replaces_an_interrupted_plan_but_never_a_final_one()
+    {
+        var record = new JobRecord("north", "north", "w", 1, DateTimeOffset.UnixEpoch, DateTimeOffset.UnixEpoch, Interrupted: true, Final: false);
+        string first = Publisher.NewPartial(Dir, "w", "north");
+        record.Write(first);
+        Assert.Equal(Path.Combine(Dir, "north"), Publisher.Publish(first, Dir, "north", "w"));
+
+        string second = Publisher.NewPartial(Dir, "w", "north");
+        (record with { Interrupted = false, Final = true }).Write(second);
+        Assert.Equal(Path.Combine(Dir, "north"), Publisher.Publish(second, Dir, "north", "w"));
+        Assert.True(JobRecord.TryRead(Path.Combine(Dir, "north"))!.Final);
+
+        // Another job of the same name keeps the final result and takes the next free name.
+        string third = Publisher.NewPartial(Dir, "w", "north");
+        Assert.Equal(Path.Combine(Dir, "north-2"), Publisher.Publish(third, Dir, "north", "w"));
+        Assert.Equal(["north", "north-2"], Directory.GetDirectories(Dir).Select(d => Path.GetFileName(d)).Order(StringComparer.Ordinal));
+    }
+
+    [Fact]
     public void Settings_are_checked_at_start_up_and_every_problem_is_named()
     {
         var err = new StringWriter();
