@@ -69,6 +69,7 @@ public static class CliApp
         root.Subcommands.Add(SolveCommand.Create(context));
         root.Subcommands.Add(BenchCommand.Create(context));
         root.Subcommands.Add(PlotCommand.Create(context));
+        root.Subcommands.Add(WorkerCommand.Create(context));
         return root;
     }
 }

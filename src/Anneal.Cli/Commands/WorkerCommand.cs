@@ -1,0 +1,95 @@
+using System.CommandLine;
+using System.Globalization;
+using Anneal.Formats.Output;
+using Anneal.Worker;
+using Microsoft.Extensions.DependencyInjection;
+using Microsoft.Extensions.Hosting;
+using Microsoft.Extensions.Options;
+
+namespace Anneal.Cli.Commands;
+
+/// <summary>`anneal worker`: solves every job dropped into an inbox folder, unattended, until stopped (or once with --once).</summary>
+public static class WorkerCommand
+{
+    public static Command Create(CliContext context)
+    {
+        var inbox = new Option<string?>("--inbox") { Description = "Folder where jobs are dropped (a job folder, a .zip of one, or a benchmark file).", HelpName = "dir" };
+        var outbox = new Option<string?>("--outbox") { Description = "Folder where each solved job's folder appears, complete.", HelpName = "dir" };
+        var time = new Option<double?>("--time") { Description = "Search budget per job, for jobs whose settings give none. Default 60.", HelpName = "seconds" };
+        var jobs = new Option<int?>("--jobs") { Description = "Jobs solved at the same time. Default 1.", HelpName = "n" };
+        var threads = new Option<int?>("--threads") { Description = "Independent searches per solver within a job. Default 1.", HelpName = "n" };
+        var solvers = new Option<string?>("--solvers") { Description = "Comma-separated solver names for every job. Default: each job's list, else all that apply.", HelpName = "list" };
+        var once = new Option<bool>("--once") { Description = "Solve what the inbox holds, then exit (for cron and scripts)." };
+        var command = new Command("worker",
+            "Watch an inbox and solve every job in it; settings also come from appsettings.json and ANNEAL_Worker__* variables. Exit 0 after --once, 130 when stopped.");
+        foreach (Option option in new Option[] { inbox, outbox, time, jobs, threads, solvers, once })
+        {
+            command.Options.Add(option);
+        }
+
+        command.SetAction(parse =>
+        {
+            var settings = new Dictionary<string, string?>(StringComparer.OrdinalIgnoreCase);
+            Put(settings, nameof(WorkerOptions.Inbox), parse.GetValue(inbox));
+            Put(settings, nameof(WorkerOptions.Outbox), parse.GetValue(outbox));
+            Put(settings, nameof(WorkerOptions.TimeSeconds), parse.GetValue(time)?.ToString("R", CultureInfo.InvariantCulture));
+            Put(settings, nameof(WorkerOptions.ConcurrentJobs), parse.GetValue(jobs)?.ToString(CultureInfo.InvariantCulture));
+            Put(settings, nameof(WorkerOptions.ThreadsPerJob), parse.GetValue(threads)?.ToString(CultureInfo.InvariantCulture));
+            Put(settings, nameof(WorkerOptions.Solvers), parse.GetValue(solvers));
+            return Execute(settings, parse.GetValue(once), context);
+        });
+        return command;
+    }
+
+    /// <param name="settings">Command-line settings as configuration keys ("Worker:Inbox"); they override every other source.</param>
+    public static int Execute(IReadOnlyDictionary<string, string?> settings, bool once, CliContext context)
+    {
+        var run = new WorkerRun { Once = once };
+        try
+        {
+            // Building already reads the settings (the shutdown timeout is one of them), so it may refuse them too.
+            using var host = WorkerHost.Build(settings, run);
+            using var outside = context.Cancel.Register(() => host.Services.GetRequiredService<IHostApplicationLifetime>().StopApplication());
+            host.Run();
+        }
+        catch (Exception e) when (Invalid(e) is { } invalid)
+        {
+            foreach (var failure in invalid.Failures)
+            {
+                context.Err.WriteLine("anneal: " + failure);
+            }
+
+            return ExitCodes.InvalidInput;
+        }
+        catch (InvalidOperationException e) when (e.Message.StartsWith("Failed to convert configuration value", StringComparison.Ordinal))
+        {
+            // The binder's own wording for a value of the wrong type (a word where a number or a choice belongs).
+            context.Err.WriteLine("anneal: invalid worker setting: " + e.Message);
+            return ExitCodes.InvalidInput;
+        }
+
+        if (run.Failure is not null)
+        {
+            context.Err.WriteLine("anneal: " + run.Failure.Message);
+            return run.Failure is OutputException ? ExitCodes.OutputFailed : ExitCodes.InternalError;
+        }
+
+        return run.FinishedByItself ? ExitCodes.Success : ExitCodes.Interrupted;
+    }
+
+    private static void Put(Dictionary<string, string?> settings, string key, string? value)
+    {
+        if (value is not null)
+        {
+            settings[WorkerOptions.Section + ":" + key] = value;
+        }
+    }
+
+    /// <summary>Settings refused at start-up, however the host wrapped them.</summary>
+    private static OptionsValidationException? Invalid(Exception e) => e switch
+    {
+        OptionsValidationException v => v,
+        AggregateException a => a.InnerExceptions.Select(Invalid).FirstOrDefault(v => v is not null),
+        _ => e.InnerException is null ? null : Invalid(e.InnerException),
+    };
+}

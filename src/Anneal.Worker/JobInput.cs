@@ -1,0 +1,85 @@
+using System.IO.Compression;
+using Anneal.Formats.Input;
+
+namespace Anneal.Worker;
+
+/// <summary>Finds what to load inside a claimed entry: a CSV job folder or a single benchmark file, unzipping first if needed.</summary>
+public static class JobInput
+{
+    private const string StopsFile = "stops.csv";
+
+    /// <summary>Scratch folder for a zipped job, beside it in the worker's folder; a dot-name so it is never taken for a job.</summary>
+    public static string ScratchFor(ClaimedJob job) =>
+        Path.Combine(Path.GetDirectoryName(job.Path)!, ".unzipped-" + job.Entry.Name);
+
+    /// <exception cref="InputException">when a .zip cannot be opened.</exception>
+    public static string Locate(ClaimedJob job)
+    {
+        if (job.Entry.IsFolder)
+        {
+            return Within(job.Path);
+        }
+
+        if (!job.Entry.Extension.Equals(".zip", StringComparison.OrdinalIgnoreCase))
+        {
+            return job.Path;
+        }
+
+        string scratch = ScratchFor(job);
+        try
+        {
+            Entries.TryDelete(scratch);
+            // The extractor refuses entries that would land outside the folder ("zip slip").
+            ZipFile.ExtractToDirectory(job.Path, scratch);
+        }
+        catch (Exception e) when (e is IOException or InvalidDataException or UnauthorizedAccessException)
+        {
+            throw new InputException(new InputProblem(job.Entry.Name, null, null, null, "the .zip cannot be opened: " + e.Message,
+                "zip the job folder again (stops.csv, depots.csv, vehicles.csv at its top or in one folder), or drop the folder itself"));
+        }
+
+        return Within(scratch);
+    }
+
+    /// <summary>A folder with stops.csv is a CSV job; a folder holding one file is that file; one folder (a zipped folder) is looked into.</summary>
+    private static string Within(string folder)
+    {
+        while (true)
+        {
+            if (File.Exists(Path.Combine(folder, StopsFile)))
+            {
+                return folder;
+            }
+
+            var files = Visible(Directory.GetFiles(folder));
+            var folders = Visible(Directory.GetDirectories(folder));
+            if (files.Count == 1 && folders.Count == 0)
+            {
+                return files[0];
+            }
+
+            if (files.Count != 0 || folders.Count != 1)
+            {
+                // Let the CSV reader name what is missing.
+                return folder;
+            }
+
+            folder = folders[0];
+        }
+    }
+
+    private static List<string> Visible(string[] paths)
+    {
+        var list = new List<string>();
+        foreach (var path in paths)
+        {
+            string name = Path.GetFileName(path);
+            if (!Entries.IsHidden(name) && name != "__MACOSX")
+            {
+                list.Add(path);
+            }
+        }
+
+        return list;
+    }
+}

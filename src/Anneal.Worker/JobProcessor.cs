@@ -1,0 +1,150 @@
+using Anneal.Formats.Input;
+using Anneal.Formats.Output;
+using Anneal.Jobs;
+using Anneal.Search.Running;
+using Microsoft.Extensions.Logging;
+
+namespace Anneal.Worker;
+
+/// <summary>Solves one claimed job and leaves it in exactly one place: the outbox, failed/, or back in the inbox.</summary>
+public sealed class JobProcessor(WorkerOptions options, WorkerFolders folders, string workerId, JobClaimer claimer, ILogger log, TimeProvider clock)
+{
+    public (JobResult Result, string Where) Process(ClaimedJob job, JobProgress progress, CancellationToken stop)
+    {
+        try
+        {
+            return Solve(job, progress, stop);
+        }
+        catch (InputException e)
+        {
+            var lines = new List<string>();
+            foreach (var problem in e.Problems)
+            {
+                lines.Add(Relative(problem, job).ToString());
+            }
+
+            string folder = FailedJobs.Move(folders, workerId, job, $"Job '{job.Id}' could not be read: {Count(lines.Count)} in the input.", lines);
+            log.LogWarning("Job {JobId} has invalid input ({Problems}); moved to {Folder}", job.Id, Count(lines.Count), folder);
+            return (JobResult.Failed, folder);
+        }
+        catch (Exception e) when (e is not OperationCanceledException)
+        {
+            return GiveBack(job, e);
+        }
+        finally
+        {
+            Entries.TryDelete(JobInput.ScratchFor(job));
+        }
+    }
+
+    private (JobResult, string) Solve(ClaimedJob job, JobProgress progress, CancellationToken stop)
+    {
+        var input = InputLoader.Load(JobInput.Locate(job));
+        var objective = input.Settings.Objective ?? input.Instance.Objective;
+        var instance = objective == input.Instance.Objective ? input.Instance : input.Instance.With(objective: objective);
+        string? chosen = string.IsNullOrWhiteSpace(options.Solvers) ? null : options.Solvers;
+        var names = SolverChoice.Resolve(chosen, input.Settings.Solvers, instance, out string? unknown);
+        if (names is null)
+        {
+            throw new InputException(new InputProblem("settings.json", null, "solvers", unknown, "no such solver",
+                $"use one of: {string.Join(", ", SolverCatalog.Names.Order(StringComparer.Ordinal))}"));
+        }
+
+        if (stop.IsCancellationRequested)
+        {
+            return (JobResult.Requeued, claimer.Return(job.Path, job.Entry));
+        }
+
+        double seconds = input.Settings.TimeSeconds ?? options.TimeSeconds;
+        int seed = input.Settings.Seed ?? 1;
+        log.LogInformation("Job {JobId} started (attempt {Attempt}): {Stops} stops, solvers {Solvers}, up to {Budget:0.#} s",
+            job.Id, job.Attempt, instance.StopCount, string.Join(",", names), seconds);
+        var solveOptions = new SolveOptions { TimeLimit = TimeSpan.FromSeconds(seconds), Seed = seed, Threads = options.ThreadsPerJob };
+        var outcome = RunCoordinator.Run(instance, names, solveOptions, progress.Report, stop);
+        bool interrupted = stop.IsCancellationRequested;
+        bool requeue = interrupted && options.OnShutdown == ShutdownChoice.Requeue;
+
+        string partial = Publisher.NewPartial(folders.Outbox, workerId, job.Id);
+        var now = clock.GetUtcNow();
+        var best = outcome.Best;
+        RunFiles.Write(partial, input, instance, best.Evaluation, outcome, new RunFiles.RunFacts(seed, seconds, interrupted, now));
+        new JobRecord(job.Id, job.Entry.Name, workerId, job.Attempt, job.ClaimedAt, now, interrupted, Final: !requeue).Write(partial);
+        string published = Publisher.Publish(partial, folders.Outbox, job.Id, workerId);
+
+        // Only now is the input let go: a crash before this line leaves it in working/ for recovery, which sees job.json.
+        var result = JobResult.Solved;
+        if (requeue)
+        {
+            claimer.Return(job.Path, job.Entry);
+            result = JobResult.Requeued;
+        }
+        else
+        {
+            DropInput(job);
+            result = interrupted ? JobResult.Interrupted : JobResult.Solved;
+        }
+
+        log.LogInformation("Job {JobId} {Outcome}: {Solver} objective {BestObjective:F2} ({Feasibility}), {Vehicles} vehicles, after {Elapsed:F1} s; written to {Folder}",
+            job.Id, result switch { JobResult.Solved => "solved", JobResult.Interrupted => "interrupted (kept as its result)", _ => "interrupted (plan written, job requeued)" },
+            best.Result.Solver, best.Evaluation.Objective, best.Evaluation.Feasible ? "feasible" : "infeasible", best.Evaluation.VehiclesUsed,
+            (now - job.ClaimedAt).TotalSeconds, published);
+        return (result, published);
+    }
+
+    private void DropInput(ClaimedJob job)
+    {
+        try
+        {
+            Entries.Delete(job.Path);
+        }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+        {
+            // Published already; recovery will find job.json and only remove the input then.
+            log.LogWarning("Job {JobId}: the solved input could not be removed from {Path}: {Reason}", job.Id, job.Path, e.Message);
+        }
+    }
+
+    /// <summary>An unexpected error: the job goes back with one more retry counted, or to failed/ when they are spent.</summary>
+    private (JobResult, string) GiveBack(ClaimedJob job, Exception e)
+    {
+        string reason = e is OutputException ? e.Message : $"{e.GetType().Name}: {e.Message}";
+        if (!Entries.Exists(job.Path))
+        {
+            // It already left this worker's folder (the error came after); nothing to hand on.
+            log.LogError("Job {JobId} hit an error after its input was handed on: {Reason}", job.Id, reason);
+            return (JobResult.Failed, job.Path);
+        }
+
+        if (job.Entry.Retries >= options.MaxRetries)
+        {
+            string folder = FailedJobs.Move(folders, workerId, job, $"Job '{job.Id}' was given up after {job.Attempt} attempts.", [$"The last attempt failed with: {reason}"]);
+            log.LogError("Job {JobId} failed for good after {Attempts} attempts: {Reason}; moved to {Folder}", job.Id, job.Attempt, reason, folder);
+            return (JobResult.Failed, folder);
+        }
+
+        string back = claimer.Return(job.Path, job.Entry.WithRetries(job.Entry.Retries + 1));
+        log.LogError("Job {JobId} failed on attempt {Attempt}: {Reason}; back in the inbox as {Entry}", job.Id, job.Attempt, reason, Path.GetFileName(back));
+        return (JobResult.Retry, back);
+    }
+
+    /// <summary>Problems in a benchmark file name it as the user dropped it, not by its path inside working/.</summary>
+    private static InputProblem Relative(InputProblem problem, ClaimedJob job)
+    {
+        string folder = Path.GetDirectoryName(job.Path)! + Path.DirectorySeparatorChar;
+        if (!problem.File.StartsWith(folder, StringComparison.Ordinal))
+        {
+            return problem;
+        }
+
+        string rest = problem.File[folder.Length..];
+        if (rest.StartsWith(".unzipped-", StringComparison.Ordinal))
+        {
+            int slash = rest.IndexOf(Path.DirectorySeparatorChar);
+            rest = job.Entry.Name + (slash < 0 ? string.Empty : rest[slash..]);
+        }
+
+        return problem with { File = rest };
+    }
+
+    private static string Count(int n) => n == 1 ? "1 problem" : $"{n} problems";
+}

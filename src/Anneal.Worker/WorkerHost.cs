@@ -1,0 +1,56 @@
+using Microsoft.Extensions.Configuration;
+using Microsoft.Extensions.DependencyInjection;
+using Microsoft.Extensions.Hosting;
+using Microsoft.Extensions.Logging;
+using Microsoft.Extensions.Logging.Console;
+using Microsoft.Extensions.Options;
+
+namespace Anneal.Worker;
+
+/// <summary>
+/// Wires the worker's host: settings from appsettings.json next to the executable, then appsettings.json in the
+/// current folder, then ANNEAL_* environment variables, then the command line (each overriding the one before);
+/// logs on stderr (journald's format under systemd); the worker service.
+/// </summary>
+public static class WorkerHost
+{
+    public const string SettingsFile = "appsettings.json";
+    public const string EnvironmentPrefix = "ANNEAL_";
+
+    /// <param name="commandLine">Settings given on the command line, as configuration keys (e.g. "Worker:Inbox").</param>
+    public static IHost Build(IReadOnlyDictionary<string, string?> commandLine, WorkerRun run)
+    {
+        var builder = Host.CreateEmptyApplicationBuilder(new HostApplicationBuilderSettings { ContentRootPath = Environment.CurrentDirectory });
+        builder.Configuration
+            .AddJsonFile(Path.Combine(AppContext.BaseDirectory, SettingsFile), optional: true, reloadOnChange: false)
+            .AddJsonFile(Path.Combine(Environment.CurrentDirectory, SettingsFile), optional: true, reloadOnChange: false)
+            .AddEnvironmentVariables(EnvironmentPrefix)
+            .AddInMemoryCollection(commandLine);
+
+        builder.Logging.SetMinimumLevel(LogLevel.Information);
+        builder.Logging.AddFilter("Microsoft", LogLevel.Warning);
+        builder.Logging.AddConfiguration(builder.Configuration.GetSection("Logging"));
+        builder.Logging.AddSimpleConsole(o =>
+        {
+            o.SingleLine = true;
+            o.TimestampFormat = "yyyy-MM-dd HH:mm:ss ";
+        });
+
+        // stdout stays free for whatever calls the worker; every log line goes to stderr.
+        builder.Services.Configure<ConsoleLoggerOptions>(o => o.LogToStandardErrorThreshold = LogLevel.Trace);
+
+        var services = builder.Services;
+        services.AddSingleton(run);
+        services.AddSingleton(TimeProvider.System);
+        services.AddSingleton<IValidateOptions<WorkerOptions>, WorkerOptionsValidator>();
+        services.AddOptions<WorkerOptions>().Bind(builder.Configuration.GetSection(WorkerOptions.Section)).ValidateOnStart();
+        services.AddOptions<HostOptions>().Configure<IOptions<WorkerOptions>>((host, worker) =>
+            host.ShutdownTimeout = TimeSpan.FromSeconds(worker.Value.ShutdownTimeoutSeconds));
+        services.Configure<ConsoleLifetimeOptions>(o => o.SuppressStatusMessages = true);
+
+        // The IServiceCollection form of UseSystemd(): notify systemd when ready and stopping; a no-op outside systemd.
+        services.AddSystemd();
+        services.AddHostedService<WorkerService>();
+        return builder.Build();
+    }
+}

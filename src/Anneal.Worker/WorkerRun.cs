@@ -1,0 +1,14 @@
+namespace Anneal.Worker;
+
+/// <summary>How the command asked the worker to run and how it ended; shared by the command and the service.</summary>
+public sealed class WorkerRun
+{
+    /// <summary>Process what the inbox holds, then stop (for cron and tests).</summary>
+    public bool Once { get; init; }
+
+    /// <summary>The worker stopped by itself (--once found the inbox empty), not on a stop request.</summary>
+    public bool FinishedByItself { get; set; }
+
+    /// <summary>Set when the worker could not run at all (its folders cannot be created or written).</summary>
+    public Exception? Failure { get; set; }
+}

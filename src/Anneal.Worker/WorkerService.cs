@@ -1,0 +1,157 @@
+using Anneal.Formats.Output;
+using Microsoft.Extensions.Hosting;
+using Microsoft.Extensions.Logging;
+using Microsoft.Extensions.Options;
+
+namespace Anneal.Worker;
+
+/// <summary>
+/// The worker's loop: recover dead workers' jobs, claim jobs up to the concurrency limit, keep the status file fresh,
+/// and on a stop request let every running job write its best plan before returning. The stopping token is the only
+/// stop signal and reaches every solver.
+/// </summary>
+public sealed class WorkerService(IOptions<WorkerOptions> options, WorkerRun run, IHostApplicationLifetime lifetime, ILoggerFactory logs, TimeProvider clock)
+    : BackgroundService
+{
+    private readonly ILogger _log = logs.CreateLogger("Anneal.Worker");
+
+    protected override async Task ExecuteAsync(CancellationToken stoppingToken)
+    {
+        var o = options.Value;
+        var folders = WorkerFolders.From(o);
+        WorkerIdentity me;
+        try
+        {
+            folders.Create();
+            me = WorkerIdentity.Start(folders.Working, clock.GetUtcNow());
+        }
+        catch (Exception e) when (e is OutputException or IOException or UnauthorizedAccessException)
+        {
+            Fail(e is OutputException ? e : new OutputException($"cannot start in {folders.Working}: {e.Message}", e));
+            return;
+        }
+
+        using (me)
+        {
+            try
+            {
+                await Loop(o, folders, me, stoppingToken);
+            }
+            catch (Exception e) when (e is not OperationCanceledException)
+            {
+                Fail(e);
+            }
+        }
+    }
+
+    private async Task Loop(WorkerOptions o, WorkerFolders folders, WorkerIdentity me, CancellationToken stop)
+    {
+        var claimer = new JobClaimer(folders, me.Folder, TimeSpan.FromSeconds(o.SettleSeconds), clock);
+        var recovery = new DeadWorkerRecovery(folders, me.Id, claimer, o.MaxRetries, _log, clock);
+        var processor = new JobProcessor(o, folders, me.Id, claimer, _log, clock);
+        var status = new StatusFile(StatusFile.PathFor(folders.Working, me.Id), me.Id, clock.GetUtcNow());
+        _log.LogInformation("Worker {WorkerId} watching {Inbox}; results to {Outbox}, failures to {Failed}; up to {Jobs} job(s) at a time, {Seconds:0.#} s each unless a job says otherwise{Once}",
+            me.Id, folders.Inbox, folders.Outbox, folders.Failed, o.ConcurrentJobs, o.TimeSeconds, run.Once ? "; stops when the inbox is empty" : string.Empty);
+
+        var running = new List<Task>();
+        var nextRecovery = DateTimeOffset.MinValue;
+        var nextStatus = DateTimeOffset.MinValue;
+        while (!stop.IsCancellationRequested)
+        {
+            var now = clock.GetUtcNow();
+            try
+            {
+                if (now >= nextRecovery)
+                {
+                    recovery.Run();
+                    nextRecovery = now + TimeSpan.FromSeconds(o.RecoverSeconds);
+                }
+
+                running.RemoveAll(t => t.IsCompleted);
+                while (running.Count < o.ConcurrentJobs && !stop.IsCancellationRequested && claimer.TryClaimNext() is { } job)
+                {
+                    running.Add(Start(job, processor, status, stop));
+                }
+
+                if (now >= nextStatus)
+                {
+                    status.Write("running", now);
+                    nextStatus = now + TimeSpan.FromSeconds(o.StatusSeconds);
+                }
+
+                if (run.Once && running.Count == 0 && !claimer.InboxHasJobs())
+                {
+                    run.FinishedByItself = true;
+                    break;
+                }
+            }
+            catch (Exception e) when (e is IOException or UnauthorizedAccessException or OutputException)
+            {
+                // A shared folder that hiccups must not end the night's work: log and poll again.
+                _log.LogError("Worker {WorkerId}: {Reason}; trying again", me.Id, e.Message);
+            }
+
+            // WhenAny never throws, so a stop request simply ends the wait; a finished job ends it early too.
+            var poll = Task.Delay(TimeSpan.FromSeconds(o.PollSeconds), clock, stop);
+            await Task.WhenAny([poll, .. running]);
+        }
+
+        if (running.Count > 0)
+        {
+            _log.LogInformation("Worker {WorkerId} stopping: {Running} running job(s) are writing their best plans", me.Id, running.Count);
+            TryWrite(status, "stopping");
+            await Task.WhenAll(running);
+        }
+
+        TryWrite(status, "stopped");
+        _log.LogInformation("Worker {WorkerId} stopped", me.Id);
+        if (run.FinishedByItself)
+        {
+            lifetime.StopApplication();
+        }
+    }
+
+    private Task Start(ClaimedJob job, JobProcessor processor, StatusFile status, CancellationToken stop)
+    {
+        var progress = new JobProgress(job, _log, clock);
+        status.Started(progress);
+        _log.LogInformation("Job {JobId} claimed from the inbox as {Entry}", job.Id, job.Entry.Name);
+
+        // Solvers block their threads for the whole budget; long-running tasks keep them off the thread pool.
+        return Task.Factory.StartNew(() =>
+        {
+            (JobResult Result, string Where) done;
+            try
+            {
+                done = processor.Process(job, progress, stop);
+            }
+            catch (Exception e)
+            {
+                // The job stays in this worker's folder; the next start-up recovers it with a retry counted.
+                _log.LogError("Job {JobId} could not be handed on: {Reason}; it stays in {Path}", job.Id, e.Message, job.Path);
+                done = (JobResult.Retry, job.Path);
+            }
+
+            status.Finished(job, done.Result, done.Where, clock.GetUtcNow());
+        }, CancellationToken.None, TaskCreationOptions.LongRunning, TaskScheduler.Default);
+    }
+
+    private void TryWrite(StatusFile status, string state)
+    {
+        try
+        {
+            status.Write(state, clock.GetUtcNow());
+        }
+        catch (OutputException e)
+        {
+            _log.LogWarning("The status file cannot be written: {Reason}", e.Message);
+        }
+    }
+
+    private void Fail(Exception e)
+    {
+        run.Failure = e;
+        _log.LogCritical("The worker cannot run: {Reason}", e.Message);
+        lifetime.StopApplication();
+    }
+}

@@ -1,0 +1,187 @@
+using System.Text.Json;
+using Anneal.Tests.Output;
+
+namespace Anneal.Tests.Worker;
+
+/// <summary>
+/// The worker's promises from issue 6, checked on the real executable: every job ends solved or explained exactly once,
+/// whatever happens to the process. Exit codes are the project's shared table (0 done, 130 stopped by a signal).
+/// </summary>
+public sealed class WorkerTests : TempFolderTest
+{
+    private string Inbox => Path.Combine(Dir, "inbox");
+
+    private string Outbox => Path.Combine(Dir, "outbox");
+
+    private string Working => Path.Combine(Dir, "working");
+
+    private string Failed => Path.Combine(Dir, "failed");
+
+    [Fact]
+    public void Valid_jobs_are_solved_and_broken_ones_explained_with_row_and_column()
+    {
+        for (int k = 1; k <= 4; k++)
+        {
+            WorkerJobs.DropValid(Dir, $"depot-{k}", k);
+        }
+
+        WorkerJobs.DropBadDemand(Dir, "bad-demand");
+        WorkerJobs.DropBadShift(Dir, "bad-shift");
+
+        using var worker = WorkerProcess.Start(Dir, "--once", "--time", "1", "--solvers", "sa", "--jobs", "2");
+        Assert.True(worker.WaitForExit() == 0, worker.Log);
+
+        Assert.Equal(["depot-1", "depot-2", "depot-3", "depot-4"], Names(Outbox));
+        foreach (var job in Names(Outbox))
+        {
+            AssertComplete(Path.Combine(Outbox, job), interrupted: false);
+        }
+
+        Assert.Equal(["bad-demand", "bad-shift"], Names(Failed));
+        string demand = File.ReadAllText(Path.Combine(Failed, "bad-demand", "error.txt"));
+        Assert.Contains("stops.csv, row 3, column 'demand_kg'", demand, StringComparison.Ordinal);
+        string shift = File.ReadAllText(Path.Combine(Failed, "bad-shift", "error.txt"));
+        Assert.Contains("vehicles.csv, row 2, column 'shift_start'", shift, StringComparison.Ordinal);
+
+        // The input is kept as given, so it can be fixed and dropped again.
+        Assert.True(File.Exists(Path.Combine(Failed, "bad-demand", "bad-demand", "stops.csv")));
+        AssertNothingLeft();
+    }
+
+    [Fact]
+    public void A_worker_killed_mid_job_loses_nothing_and_the_next_one_finishes_every_job_once()
+    {
+        string[] jobs = ["north", "quay", "south"];
+        for (int k = 0; k < jobs.Length; k++)
+        {
+            WorkerJobs.DropValid(Dir, jobs[k], 10 + k);
+        }
+
+        using (var first = WorkerProcess.Start(Dir, "--time", "60", "--solvers", "sa"))
+        {
+            WaitUntilSolving(first);
+            first.Kill();
+        }
+
+        // The killed worker's claim is still on disk, not lost.
+        Assert.Single(Directory.GetDirectories(Working).SelectMany(Directory.GetFileSystemEntries));
+
+        using var second = WorkerProcess.Start(Dir, "--once", "--time", "1", "--solvers", "sa");
+        Assert.True(second.WaitForExit() == 0, second.Log);
+
+        Assert.Equal(jobs, Names(Outbox));
+        foreach (var job in jobs)
+        {
+            AssertComplete(Path.Combine(Outbox, job), interrupted: false);
+        }
+
+        // The killed job was solved on its second attempt, the others on their first.
+        int retried = jobs.Count(j => Record(Path.Combine(Outbox, j)).GetProperty("attempt").GetInt32() == 2);
+        Assert.Equal(1, retried);
+        Assert.Empty(Names(Failed));
+        AssertNothingLeft();
+    }
+
+    [Fact]
+    public void Two_workers_on_one_inbox_solve_each_job_exactly_once()
+    {
+        var jobs = Enumerable.Range(1, 10).Select(k => $"job-{k:00}").ToArray();
+        for (int k = 0; k < jobs.Length; k++)
+        {
+            WorkerJobs.DropValid(Dir, jobs[k], 20 + k);
+        }
+
+        using var a = WorkerProcess.Start(Dir, "--once", "--time", "0.5", "--solvers", "sa");
+        using var b = WorkerProcess.Start(Dir, "--once", "--time", "0.5", "--solvers", "sa");
+        Assert.True(a.WaitForExit() == 0, a.Log);
+        Assert.True(b.WaitForExit() == 0, b.Log);
+
+        // A second solve of a job would show as a "job-01-2" folder and as an eleventh "done" in the status files.
+        Assert.Equal(jobs, Names(Outbox));
+        int done = Directory.GetFiles(Working, "*.status.json").Sum(f => Json(f).GetProperty("done").GetInt32());
+        Assert.Equal(10, done);
+        foreach (var job in jobs)
+        {
+            AssertComplete(Path.Combine(Outbox, job), interrupted: false);
+        }
+
+        AssertNothingLeft();
+    }
+
+    [Fact]
+    public void SIGTERM_during_a_long_job_writes_the_interrupted_plan_and_requeues_the_job()
+    {
+        WorkerJobs.DropValid(Dir, "long", 3);
+        using var worker = WorkerProcess.Start(Dir, "--time", "120", "--solvers", "sa");
+        WaitUntilSolving(worker);
+        worker.Terminate();
+
+        // ShutdownTimeoutSeconds is 10 here; the deadline is generous on purpose.
+        Assert.True(worker.WaitForExit(30) == 130, worker.Log);
+        AssertComplete(Path.Combine(Outbox, "long"), interrupted: true);
+        Assert.False(Record(Path.Combine(Outbox, "long")).GetProperty("final").GetBoolean());
+
+        // OnShutdown = Requeue (the default): the job is back in the inbox as it was, with no retry counted.
+        Assert.Equal(["long"], Names(Inbox));
+        Assert.Empty(Directory.GetDirectories(Working));
+    }
+
+    private void WaitUntilSolving(WorkerProcess worker)
+    {
+        var deadline = DateTime.UtcNow.AddSeconds(30);
+        while (DateTime.UtcNow < deadline)
+        {
+            foreach (var file in Directory.Exists(Working) ? Directory.GetFiles(Working, "*.status.json") : [])
+            {
+                try
+                {
+                    if (Json(file).GetProperty("running").EnumerateArray().Any(j => j.GetProperty("solvers").GetArrayLength() > 0))
+                    {
+                        return;
+                    }
+                }
+                catch (Exception e) when (e is IOException or JsonException)
+                {
+                    // Replaced while being read; look again.
+                }
+            }
+
+            Thread.Sleep(100);
+        }
+
+        Assert.Fail("the worker never reported a running solver; its log:\n" + worker.Log);
+    }
+
+    private static void AssertComplete(string folder, bool interrupted)
+    {
+        foreach (var file in new[] { "routes.csv", "summary.json", "trace.csv", "job.json" })
+        {
+            Assert.True(File.Exists(Path.Combine(folder, file)), $"{file} is missing in {folder}");
+        }
+
+        Assert.Equal(interrupted, Json(Path.Combine(folder, "summary.json")).GetProperty("interrupted").GetBoolean());
+    }
+
+    /// <summary>No job left in the inbox or a worker's folder, and no partial folder anywhere.</summary>
+    private void AssertNothingLeft()
+    {
+        Assert.Empty(Directory.GetFileSystemEntries(Inbox));
+        Assert.Empty(Directory.GetDirectories(Working));
+        Assert.Empty(Directory.GetFiles(Working, "*.lock"));
+        Assert.Empty(Directory.GetDirectories(Outbox, ".*"));
+        Assert.Empty(Directory.GetDirectories(Failed, ".*"));
+    }
+
+    private static JsonElement Record(string folder) => Json(Path.Combine(folder, "job.json"));
+
+    private static JsonElement Json(string path)
+    {
+        using var document = JsonDocument.Parse(File.ReadAllBytes(path));
+        return document.RootElement.Clone();
+    }
+
+    private static string[] Names(string folder) =>
+        Directory.Exists(folder)
+            ? Directory.GetFileSystemEntries(folder).Select(p => Path.GetFileName(p)).Where(n => !n.StartsWith('.')).Order(StringComparer.Ordinal).ToArray()
+            : [];
+}
