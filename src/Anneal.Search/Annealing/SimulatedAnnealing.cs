@@ -38,12 +38,13 @@ public sealed class SimulatedAnnealing : ISolver
         var state = InsertionSolver.Build(instance, candidates, cancel);
         var rng = new Random(options.Seed);
         double arc = InitialWeights.TypicalArcCost(instance);
-        var adapter = new PenaltyAdapter(InitialWeights.For(instance, 10), 0.2, arc * 0.01, arc * 1e4);
+        var adapter = new PenaltyAdapter(InitialWeights.For(instance, 10), 0.2, arc * 0.01, InitialWeights.Ceiling(instance));
         state.SetWeights(adapter.Weights);
         var keeper = new BestKeeper(state);
         var sampler = new MoveSampler(state, candidates, rng);
         trace.Improved(Point(budget, 0, keeper, state, "construction"));
 
+        bool reduceVehicles = RouteElimination.Applies(instance);
         double startTemperature = Calibrate(state, sampler, _settings.StartAcceptance);
         double endTemperature = startTemperature * _settings.EndRatio;
         double temperature = startTemperature;
@@ -64,11 +65,10 @@ public sealed class SimulatedAnnealing : ISolver
                     adapter.Update(state);
                 }
 
-                if (p - lastImprovedAt > _settings.StagnationFraction && p < 0.85)
+                double stagnation = reduceVehicles ? _settings.StagnationFraction / 2 : _settings.StagnationFraction;
+                if (p - lastImprovedAt > stagnation && p < 0.85)
                 {
-                    keeper.BeforeReset(state);
-                    keeper.Restore(state);
-                    state.SetWeights(adapter.Weights);
+                    Restart.FromBest(state, keeper, adapter, reduceVehicles && p < 0.7, rng);
                     boost = _settings.ReheatBoost;
                     lastImprovedAt = p;
                 }

@@ -59,7 +59,7 @@ public static class CheapestInsertion
                 }
             }
 
-            bool mayStayOut = state.Instance.MayDrop(u) && bestDelta >= 0;
+            bool mayStayOut = state.Instance.MayDrop(u) && (bestDelta >= BreakSurcharge || bestDelta >= 0);
             if (!double.IsPositiveInfinity(bestDelta) && !mayStayOut)
             {
                 state.Apply(ref best);
@@ -67,6 +67,8 @@ public static class CheapestInsertion
         }
     }
 
+    // A position that breaks no further hard rule always beats one that does, however small the break:
+    // any finite price could be undercut by a tiny time warp when a route is dear (vehicles-then-distance).
     private static void Consider(SearchState state, ref MoveDraft move, ref MoveDraft best, ref double bestDelta, bool built)
     {
         if (!built)
@@ -74,13 +76,17 @@ public static class CheapestInsertion
             return;
         }
 
-        double d = state.Delta(ref move);
+        var parts = state.EvaluateParts(ref move);
+        bool breaks = parts.TimeWindow + parts.Capacity + parts.Overtime + parts.Duration + parts.Skill > 1e-9;
+        double d = parts.Penalized(state.Weights) + (breaks ? BreakSurcharge : 0);
         if (d < bestDelta)
         {
             bestDelta = d;
             best = move;
         }
     }
+
+    private const double BreakSurcharge = 1e18;
 
     /// <summary>An unused vehicle, or -1 when every vehicle has a route.</summary>
     public static int FirstEmptyRoute(SearchState state)

@@ -24,7 +24,7 @@ public sealed class InsertionSolver : ISolver
     /// <summary>A fresh state filled by cheapest insertion under high penalty weights.</summary>
     public static SearchState Build(Instance instance, CandidateLists candidates, CancellationToken cancel = default)
     {
-        var state = new SearchState(instance, InitialWeights.For(instance, 10000));
+        var state = new SearchState(instance, InitialWeights.ForConstruction(instance));
         CheapestInsertion.Run(state, candidates, CheapestInsertion.FarthestFirst(instance), cancel);
         return state;
     }

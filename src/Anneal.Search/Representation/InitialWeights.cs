@@ -12,6 +12,33 @@ public static class InitialWeights
         return PenaltyWeights.Uniform(Math.Max(1e-6, arc * factor / 10));
     }
 
+    /// <summary>
+    /// Prices for the construction heuristic: dear enough that breaking a hard rule never beats opening a route,
+    /// whatever a route costs under the objective (the vehicle weight, a fixed cost).
+    /// </summary>
+    public static PenaltyWeights ForConstruction(Instance instance) =>
+        PenaltyWeights.Uniform(Math.Max(TypicalArcCost(instance) * 1000, RouteOpeningCost(instance) * 10));
+
+    /// <summary>Upper bound for adaptive prices: a violation must be able to outweigh a whole route.</summary>
+    public static double Ceiling(Instance instance) => Math.Max(TypicalArcCost(instance) * 1e4, RouteOpeningCost(instance) * 10);
+
+    /// <summary>What using one more vehicle costs under the objective, before distance.</summary>
+    public static double RouteOpeningCost(Instance instance)
+    {
+        double most = 0;
+        for (int v = 0; v < instance.Vehicles.Count; v++)
+        {
+            most = Math.Max(most, instance.Objective switch
+            {
+                Objective.VehiclesThenDistance => instance.VehicleWeight,
+                Objective.Cost => instance.Vehicles[v].FixedCost,
+                _ => 0,
+            });
+        }
+
+        return most;
+    }
+
     /// <summary>Mean cost of a depot-to-stop arc under the objective (distance, or money per km for cost).</summary>
     public static double TypicalArcCost(Instance instance)
     {

@@ -77,6 +77,7 @@ public sealed class TabuSearch : ISolver
         private readonly int[] _frequency;
         private readonly double _tenure;
         private int _window;
+        private readonly bool _reduceVehicles;
 
         public BestKeeper Keeper { get; }
 
@@ -93,7 +94,7 @@ public sealed class TabuSearch : ISolver
             _k = candidates.K;
             _columns = state.RouteCount + 1;
             double arc = InitialWeights.TypicalArcCost(instance);
-            _adapter = new PenaltyAdapter(InitialWeights.For(instance, 10), _settings.PenaltyDelta, arc * 0.01, arc * 1e4);
+            _adapter = new PenaltyAdapter(InitialWeights.For(instance, 10), _settings.PenaltyDelta, arc * 0.01, InitialWeights.Ceiling(instance));
             state.SetWeights(_adapter.Weights);
             Keeper = new BestKeeper(state);
             int pairs = _n * _k;
@@ -113,6 +114,7 @@ public sealed class TabuSearch : ISolver
             _tabuUntil = new int[_n * _columns];
             _frequency = new int[_n * _columns];
             _tenure = _settings.TenureFactor * Math.Log10(Math.Max(10, _n));
+            _reduceVehicles = RouteElimination.Applies(instance);
         }
 
         public void Loop(double? target)
@@ -151,11 +153,10 @@ public sealed class TabuSearch : ISolver
 
                 _adapter.Update(_state);
                 double p = _budget.Progress(iteration);
-                if (p - lastImprovedAt > _settings.StagnationFraction && p < 0.9)
+                double stagnation = _reduceVehicles ? _settings.StagnationFraction / 2 : _settings.StagnationFraction;
+                if (p - lastImprovedAt > stagnation && p < 0.9)
                 {
-                    Keeper.BeforeReset(_state);
-                    Keeper.Restore(_state);
-                    _state.SetWeights(_adapter.Weights);
+                    Restart.FromBest(_state, Keeper, _adapter, _reduceVehicles && p < 0.7, _rng);
                     Array.Clear(_tabuUntil);
                     lastImprovedAt = p;
                 }
