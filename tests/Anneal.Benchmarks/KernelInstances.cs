@@ -27,6 +27,11 @@ public static class KernelInstances
     {
         var root = BenchmarkFolder.Locate() ?? throw new InvalidOperationException("benchmark folder not found");
         var path = Path.Combine(root, relative);
+        if (!File.Exists(path))
+        {
+            throw new FileNotFoundException($"{relative} is absent from {root}; this benchmark cannot run without it", path);
+        }
+
         return SolomonReader.Parse(File.ReadAllText(path), Path.GetFileName(path));
     }
 }

@@ -5,7 +5,10 @@ using BenchmarkDotNet.Running;
 var folder = BenchmarkFolder.Locate();
 if (folder is null)
 {
-    Console.WriteLine($"Kernel benchmarks not run: ../shared/benchmarks is absent beside the repository and ${BenchmarkFolder.Variable} is not set to a folder.");
+    var given = Environment.GetEnvironmentVariable(BenchmarkFolder.Variable);
+    Console.WriteLine(string.IsNullOrEmpty(given)
+        ? $"Kernel benchmarks not run: ../shared/benchmarks is absent beside the repository (set ${BenchmarkFolder.Variable} to the folder elsewhere)."
+        : $"Kernel benchmarks not run: ${BenchmarkFolder.Variable} is {given}, which is not a folder.");
     return 0;
 }
 
