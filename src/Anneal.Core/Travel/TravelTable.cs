@@ -129,6 +129,24 @@ public sealed class TravelTable
         return d is not null ? d[(from * _count) + to] : ComputePlanar(from, to) * _timePerDistance;
     }
 
+    /// <summary>Distance and duration of one arc, computing the geometry once when it is not stored.</summary>
+    [System.Runtime.CompilerServices.MethodImpl(System.Runtime.CompilerServices.MethodImplOptions.AggressiveInlining)]
+    public void Arc(int from, int to, out double distance, out double duration)
+    {
+        var d = _distance;
+        if (d is not null)
+        {
+            int k = (from * _count) + to;
+            distance = d[k];
+            duration = _duration![k];
+        }
+        else
+        {
+            distance = ComputePlanar(from, to);
+            duration = distance * _timePerDistance;
+        }
+    }
+
     private double ComputePlanar(int from, int to)
     {
         double dx = _x[from] - _x[to];

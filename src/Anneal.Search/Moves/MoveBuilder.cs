@@ -146,6 +146,13 @@ public static class MoveBuilder
         int pu = s.PositionOf(u), pv = s.PositionOf(v);
         int cu = after ? pu : pu - 1;
         int cv = after ? pv : pv - 1;
+        bool noTails = cu == s.Length(ru) - 1 && cv == s.Length(rv) - 1;
+        bool noHeads = cu < 0 && cv < 0;
+        if (noTails || noHeads)
+        {
+            return false; // nothing changes hands (or two whole routes swap vehicles)
+        }
+
         m.Reset(MoveKind.TwoOptStar);
         m.RouteCount = 2;
         m.A.Clear(ru);

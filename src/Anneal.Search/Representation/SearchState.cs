@@ -544,7 +544,8 @@ public sealed class SearchState
 
     private static void Append(ref Segment acc, in Segment next, Core.Travel.TravelTable travel)
     {
-        acc = Segment.Concat(in acc, in next, travel.Duration(acc.Last, next.First), travel.Distance(acc.Last, next.First));
+        travel.Arc(acc.Last, next.First, out double distance, out double duration);
+        acc = Segment.Concat(in acc, in next, duration, distance);
     }
 
     /// <summary>Writes the draft's stops, in order, into <paramref name="target"/>; returns the count.</summary>

@@ -77,6 +77,8 @@ public sealed class TabuSearch : ISolver
         private readonly int[] _frequency;
         private readonly double _tenure;
         private int _window;
+        private int _chosenU;
+        private int _chosenV;
         private readonly bool _reduceVehicles;
 
         public BestKeeper Keeper { get; }
@@ -137,7 +139,7 @@ public sealed class TabuSearch : ISolver
                 MarkTabu(ref move, iteration);
                 if (move.RouteCount == 1 && move.Inserted < 0 && move.Dropped < 0)
                 {
-                    MarkIntraRoute(ref move, iteration);
+                    MarkIntraRoute(_chosenU, _chosenV, move.A.Route, iteration);
                 }
 
                 _state.Apply(ref move);
@@ -260,6 +262,9 @@ public sealed class TabuSearch : ISolver
                 return false;
             }
 
+            _chosenU = bestU;
+            _chosenV = bestJ >= 0 ? _candidates.At(bestU, bestJ) : -1;
+
             return bestJ >= 0
                 ? Build(ref move, bestU, _candidates.At(bestU, bestJ), bestKind)
                 : BuildSolo(ref move, bestU, bestKind);
@@ -372,8 +377,8 @@ public sealed class TabuSearch : ISolver
 
             if (ru == rv)
             {
-                // Within a route the attribute is the stop itself: without this, a move and its reverse alternate forever.
-                return _tabuUntil[(u * _columns) + ru] > iteration || (kind == 2 && _tabuUntil[(v * _columns) + ru] > iteration);
+                // Within a route the attributes are the stops themselves: without this, a move and its reverse alternate forever.
+                return _tabuUntil[(u * _columns) + ru] > iteration || _tabuUntil[(v * _columns) + ru] > iteration;
             }
 
             return kind switch
@@ -425,18 +430,14 @@ public sealed class TabuSearch : ISolver
             }
         }
 
-        private void MarkIntraRoute(ref MoveDraft move, int iteration)
+        // Within a route the move's two stops are the attributes: neither may move again within its route for a while.
+        private void MarkIntraRoute(int u, int v, int route, int iteration)
         {
             int until = iteration + (int)Math.Round(_tenure * (0.5 + _rng.NextDouble()));
-            int route = move.A.Route;
-            for (int k = 0; k < move.A.Count; k++)
+            _tabuUntil[(u * _columns) + route] = until;
+            if (v >= 0)
             {
-                ref var piece = ref move.A.Pieces[k];
-                if (piece.Length <= 3)
-                {
-                    // Short pieces are what the move displaced (the relocated stop, the swapped pair, the chain).
-                    _tabuUntil[(_state.StopAt(route, piece.From) * _columns) + route] = until;
-                }
+                _tabuUntil[(v * _columns) + route] = until;
             }
         }
 
