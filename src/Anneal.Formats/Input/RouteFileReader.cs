@@ -122,14 +122,15 @@ public static class RouteFileReader
 
     private static int? Resolve(string token, Dictionary<string, int> index, Instance instance, TextLine line, string label, ProblemLog log)
     {
-        if (!long.TryParse(token, NumberStyles.AllowLeadingSign, CultureInfo.InvariantCulture, out long n))
+        // Ids as written first (CSV jobs use text ids such as FEN-01); numbers also in canonical form, so "007" finds stop 7.
+        if (index.TryGetValue(token, out int exact))
         {
-            log.Add(line.Row, label, token, "a stop id in a route file must be a whole number", "list the stops by their numbers in the instance file");
-            return null;
+            return exact;
         }
 
-        // Canonical form, so "007" finds stop 7.
-        string id = n.ToString(CultureInfo.InvariantCulture);
+        string id = long.TryParse(token, NumberStyles.AllowLeadingSign, CultureInfo.InvariantCulture, out long n)
+            ? n.ToString(CultureInfo.InvariantCulture)
+            : token;
         if (index.TryGetValue(id, out int s))
         {
             return s;
@@ -143,7 +144,7 @@ public static class RouteFileReader
 
         log.Add(line.Row, label, token,
             depot ? $"{id} is the depot, which is implicit at both ends of a route" : $"no stop has id {id} in instance {instance.Name}",
-            depot ? "leave the depot out of route lines" : "use the stop numbers of the instance file");
+            depot ? "leave the depot out of route lines" : "use the stop ids of the instance (the numbers of a benchmark file, the id column of stops.csv)");
         return null;
     }
 }
