@@ -19,6 +19,7 @@ public static class SolveCommand
         var solvers = new Option<string?>("--solvers") { Description = "Comma-separated solver names, e.g. sa,tabu. Default: the job's list, else all that apply.", HelpName = "list" };
         var time = new Option<double?>("--time") { Description = $"Wall-clock budget in seconds. Default: the job's timeSeconds, else {DefaultTimeSeconds}.", HelpName = "seconds" };
         var iterations = new Option<long?>("--iterations") { Description = "Also stop each solver after this many iterations (reproducible with --seed).", HelpName = "n" };
+        var target = new Option<double?>("--target") { Description = "Stop a solver as soon as it has a feasible plan with an objective at or below this.", HelpName = "objective" };
         var objective = SharedOptions.Objective();
         var seed = new Option<int?>("--seed") { Description = "Random seed (solver k uses seed + k). Default: the job's seed, else 1.", HelpName = "n" };
         var threads = new Option<int?>("--threads") { Description = "Independent searches per solver run in parallel. Default 1.", HelpName = "n" };
@@ -26,7 +27,7 @@ public static class SolveCommand
         var quiet = new Option<bool>("--quiet") { Description = "No progress lines while solving." };
         var command = new Command("solve", "Search for a good plan and write routes.csv, summary.json and trace.csv; exit 0 feasible, 3 infeasible, 130 interrupted.");
         command.Arguments.Add(input);
-        foreach (Option option in new Option[] { solvers, time, iterations, objective, seed, threads, output, quiet })
+        foreach (Option option in new Option[] { solvers, time, iterations, target, objective, seed, threads, output, quiet })
         {
             command.Options.Add(option);
         }
@@ -38,6 +39,7 @@ public static class SolveCommand
                 Solvers = parse.GetValue(solvers),
                 TimeSeconds = parse.GetValue(time),
                 Iterations = parse.GetValue(iterations),
+                Target = parse.GetValue(target),
                 Objective = parse.GetValue(objective),
                 Seed = parse.GetValue(seed),
                 Threads = parse.GetValue(threads),
@@ -87,6 +89,7 @@ public static class SolveCommand
         {
             TimeLimit = TimeSpan.FromSeconds(seconds),
             IterationLimit = request.Iterations,
+            TargetObjective = request.Target,
             Seed = seed,
             Threads = request.Threads ?? 1,
         };

@@ -6,6 +6,7 @@ public sealed record SolveRequest
     public string? Solvers { get; init; }
     public double? TimeSeconds { get; init; }
     public long? Iterations { get; init; }
+    public double? Target { get; init; }
     public string? Objective { get; init; }
     public int? Seed { get; init; }
     public int? Threads { get; init; }

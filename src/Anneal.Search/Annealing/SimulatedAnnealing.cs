@@ -32,14 +32,10 @@ public sealed class SimulatedAnnealing : ISolver
             return ParallelRuns.Run(() => new SimulatedAnnealing(_settings), instance, options, progress, cancel);
         }
 
-        var budget = new Budget(options, cancel);
-        var trace = new TraceRecorder(progress, options.TimeLimit.TotalSeconds);
-        var candidates = new CandidateLists(instance, _settings.Neighbours);
-        var state = InsertionSolver.Build(instance, candidates, cancel);
+        var start = SearchStart.Begin(instance, options, _settings.Neighbours, progress, cancel);
+        var (budget, trace, candidates, state) = start;
+        var adapter = start.Prices(0.2);
         var rng = new Random(options.Seed);
-        double arc = InitialWeights.TypicalArcCost(instance);
-        var adapter = new PenaltyAdapter(InitialWeights.For(instance, 10), 0.2, arc * 0.01, InitialWeights.Ceiling(instance));
-        state.SetWeights(adapter.Weights);
         var keeper = new BestKeeper(state);
         var sampler = new MoveSampler(state, candidates, rng);
         trace.Improved(Point(budget, 0, keeper, state, "construction"));
@@ -95,6 +91,10 @@ public sealed class SimulatedAnnealing : ISolver
             {
                 lastImprovedAt = budget.Progress(iteration);
                 trace.Improved(Point(budget, iteration, keeper, state, $"T={temperature:G4}"));
+                if (options.TargetObjective is { } target && keeper.HasFeasible && keeper.Objective <= target)
+                {
+                    break;
+                }
             }
         }
 

@@ -77,7 +77,7 @@ public static class CheapestInsertion
         }
 
         var parts = state.EvaluateParts(ref move);
-        bool breaks = parts.TimeWindow + parts.Capacity + parts.Overtime + parts.Duration + parts.Skill > 1e-9;
+        bool breaks = parts.Violation.RouteTotal > 1e-9;
         double d = parts.Penalized(state.Weights) + (breaks ? BreakSurcharge : 0);
         if (d < bestDelta)
         {

@@ -1,3 +1,6 @@
+using Anneal.Core.Evaluation;
+using Anneal.Search.Representation;
+
 namespace Anneal.Search.Moves;
 
 /// <summary>
@@ -7,12 +10,7 @@ namespace Anneal.Search.Moves;
 public struct MoveParts
 {
     public double Objective;
-    public double TimeWindow;
-    public double Capacity;
-    public double Overtime;
-    public double Duration;
-    public double Skill;
-    public double Unserved;
+    public RuleAmounts Violation;
 
     /// <summary>Change in the number of infeasible routes among the routes the move rebuilds.</summary>
     public int InfeasibleRoutes;
@@ -20,10 +18,8 @@ public struct MoveParts
     /// <summary>Feasibility after the move, as computed; stale once other routes change (see SearchState.FeasibleAfter).</summary>
     public bool FeasibleAfter;
 
-    public readonly double Penalized(in Core.Evaluation.PenaltyWeights w) =>
-        Objective + (TimeWindow * w.TimeWindow) + (Capacity * w.Capacity) + (Overtime * w.Overtime)
-        + (Duration * w.Duration) + (Skill * w.Skill) + (Unserved * w.Unserved);
+    public readonly double Penalized(in PenaltyWeights w) => Objective + Violation.Weighted(w);
 
-    public readonly MoveEffect Effect(in Core.Evaluation.PenaltyWeights w) =>
+    public readonly MoveEffect Effect(in PenaltyWeights w) =>
         new() { Penalized = Penalized(w), Objective = Objective, FeasibleAfter = FeasibleAfter };
 }

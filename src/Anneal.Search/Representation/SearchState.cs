@@ -174,10 +174,10 @@ public sealed class SearchState
     }
 
     /// <summary>Total violation per hard rule over all routes (zero where the rule is soft).</summary>
-    public Violations CurrentViolations()
+    public RuleAmounts CurrentViolations()
     {
         var rules = Instance.Rules;
-        var v = default(Violations);
+        var v = default(RuleAmounts);
         for (int r = 0; r < RouteCount; r++)
         {
             if (_feasible[r])
@@ -245,7 +245,7 @@ public sealed class SearchState
 
     /// <summary>Feasibility after a move whose parts were computed earlier, against the state as it is now.</summary>
     public bool FeasibleAfter(in MoveParts parts) =>
-        _infeasibleRoutes + parts.InfeasibleRoutes == 0 && _mandatoryUnserved + parts.Unserved == 0;
+        _infeasibleRoutes + parts.InfeasibleRoutes == 0 && _mandatoryUnserved + parts.Violation.Unserved == 0;
 
     /// <summary>The move's effect split by rule (see <see cref="MoveParts"/>).</summary>
     public MoveParts EvaluateParts(ref MoveDraft move)
@@ -265,13 +265,13 @@ public sealed class SearchState
         if (move.Dropped >= 0)
         {
             parts.Objective += CostModel.UnservedObjective(Instance, move.Dropped);
-            parts.Unserved += Instance.MayDrop(move.Dropped) ? 0 : 1;
+            parts.Violation.Unserved += Instance.MayDrop(move.Dropped) ? 0 : 1;
         }
 
         if (move.Inserted >= 0)
         {
             parts.Objective -= CostModel.UnservedObjective(Instance, move.Inserted);
-            parts.Unserved -= Instance.MayDrop(move.Inserted) ? 0 : 1;
+            parts.Violation.Unserved -= Instance.MayDrop(move.Inserted) ? 0 : 1;
         }
 
         parts.FeasibleAfter = FeasibleAfter(ref move, feasibleA, feasibleB);
@@ -296,25 +296,25 @@ public sealed class SearchState
         parts.Objective += CostModel.RouteObjective(Instance, draft.Route, m) - _objective[draft.Route];
         if (rules.TimeWindows.Hard)
         {
-            parts.TimeWindow += Amount(m.TimeWindowViolation, m) - Amount(old.TimeWindowViolation, old);
+            parts.Violation.TimeWindow += Amount(m.TimeWindowViolation, m) - Amount(old.TimeWindowViolation, old);
         }
 
         if (rules.Capacity.Hard)
         {
-            parts.Capacity += Amount(m.Overload, m) - Amount(old.Overload, old);
+            parts.Violation.Capacity += Amount(m.Overload, m) - Amount(old.Overload, old);
         }
 
         if (rules.ShiftEnd.Hard)
         {
-            parts.Overtime += Amount(m.Overtime, m) - Amount(old.Overtime, old);
+            parts.Violation.Overtime += Amount(m.Overtime, m) - Amount(old.Overtime, old);
         }
 
         if (rules.MaxDuration.Hard)
         {
-            parts.Duration += Amount(m.DurationExcess, m) - Amount(old.DurationExcess, old);
+            parts.Violation.Duration += Amount(m.DurationExcess, m) - Amount(old.DurationExcess, old);
         }
 
-        parts.Skill += Amount(m.MissingSkills, m) - Amount(old.MissingSkills, old);
+        parts.Violation.Skill += Amount(m.MissingSkills, m) - Amount(old.MissingSkills, old);
         return CostModel.RouteFeasible(Instance, m);
     }
 

@@ -34,13 +34,11 @@ public sealed class TabuSearch : ISolver
             return ParallelRuns.Run(() => new TabuSearch(_settings), instance, options, progress, cancel);
         }
 
-        var budget = new Budget(options, cancel);
-        var trace = new TraceRecorder(progress, options.TimeLimit.TotalSeconds);
-        var candidates = new CandidateLists(instance, _settings.Neighbours);
-        var state = InsertionSolver.Build(instance, candidates, cancel);
-        var run = new Run(this, instance, state, candidates, new Random(options.Seed), budget, trace);
+        var start = SearchStart.Begin(instance, options, _settings.Neighbours, progress, cancel);
+        var run = new Run(this, start, new Random(options.Seed));
         run.Loop(options.TargetObjective);
-        return new SolverResult(Name, run.Keeper.BestPlan(state), budget.Elapsed, trace.SecondsToBest, trace.Points, budget.StopReason);
+        var budget = start.Budget;
+        return new SolverResult(Name, run.Keeper.BestPlan(start.State), budget.Elapsed, start.Trace.SecondsToBest, start.Trace.Points, budget.StopReason);
     }
 
     /// <summary>The mutable state of one tabu run.</summary>
@@ -83,21 +81,21 @@ public sealed class TabuSearch : ISolver
 
         public BestKeeper Keeper { get; }
 
-        public Run(TabuSearch owner, Instance instance, SearchState state, CandidateLists candidates, Random rng, Budget budget, TraceRecorder trace)
+        public Run(TabuSearch owner, SearchStart start, Random rng)
         {
+            var state = start.State;
+            var instance = state.Instance;
             _settings = owner._settings;
             _instance = instance;
             _state = state;
-            _candidates = candidates;
+            _candidates = start.Candidates;
             _rng = rng;
-            _budget = budget;
-            _trace = trace;
+            _budget = start.Budget;
+            _trace = start.Trace;
             _n = state.StopCount;
-            _k = candidates.K;
+            _k = _candidates.K;
             _columns = state.RouteCount + 1;
-            double arc = InitialWeights.TypicalArcCost(instance);
-            _adapter = new PenaltyAdapter(InitialWeights.For(instance, 10), _settings.PenaltyDelta, arc * 0.01, InitialWeights.Ceiling(instance));
-            state.SetWeights(_adapter.Weights);
+            _adapter = start.Prices(_settings.PenaltyDelta);
             Keeper = new BestKeeper(state);
             int pairs = _n * _k;
             _cacheRouteU = new int[pairs];

@@ -1,0 +1,28 @@
+using Anneal.Core.Model;
+using Anneal.Search.Construction;
+using Anneal.Search.Neighbourhoods;
+using Anneal.Search.Representation;
+using Anneal.Search.Running;
+
+namespace Anneal.Search.Strategy;
+
+/// <summary>What every local-search strategy starts from: its budget and trace, the candidate lists and a constructed plan.</summary>
+public sealed record SearchStart(Budget Budget, TraceRecorder Trace, CandidateLists Candidates, SearchState State)
+{
+    public static SearchStart Begin(Instance instance, SolveOptions options, int neighbours, IProgress<TracePoint>? progress, CancellationToken cancel)
+    {
+        var budget = new Budget(options, cancel);
+        var trace = new TraceRecorder(progress, options.TimeLimit.TotalSeconds);
+        var candidates = new CandidateLists(instance, neighbours);
+        return new SearchStart(budget, trace, candidates, InsertionSolver.Build(instance, candidates, cancel));
+    }
+
+    /// <summary>Adaptive hard-rule prices for this instance, starting near the typical arc cost.</summary>
+    public PenaltyAdapter Prices(double delta)
+    {
+        var instance = State.Instance;
+        var adapter = new PenaltyAdapter(InitialWeights.For(instance, 10), delta, InitialWeights.TypicalArcCost(instance) * 0.01, InitialWeights.Ceiling(instance));
+        State.SetWeights(adapter.Weights);
+        return adapter;
+    }
+}
