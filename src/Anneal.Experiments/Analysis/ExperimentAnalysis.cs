@@ -13,7 +13,7 @@ public static class ExperimentAnalysis
     public static ExperimentStatistics Compute(IReadOnlyList<BenchRow> rows)
     {
         var gaps = Gaps(rows, out var withoutReference);
-        var solvers = rows.Select(r => r.Solver).Distinct(StringComparer.Ordinal).ToList();
+        var solvers = rows.Select(r => r.Solver).Distinct(StringComparer.Ordinal).Order(StringComparer.Ordinal).ToList();
         var budgets = rows.Select(r => r.BudgetSeconds).Distinct().Order().ToList();
         var configs = new List<ConfigStats>();
         var pairs = new List<PairComparison>();

@@ -10,7 +10,7 @@ public sealed record ExperimentPictures(byte[]? Profile, byte[]? Quality, byte[]
 {
     public static ExperimentPictures Draw(string outDir, IReadOnlyList<BenchRow> rows, IReadOnlyList<TracedRun> traced, IReadOnlyList<double> percents)
     {
-        var solvers = rows.Select(r => r.Solver).Distinct(StringComparer.Ordinal).ToList();
+        var solvers = rows.Select(r => r.Solver).Distinct(StringComparer.Ordinal).Order(StringComparer.Ordinal).ToList();
         var budgets = rows.Select(r => r.BudgetSeconds).Distinct().OrderDescending().ToList();
         int instances = rows.Select(r => r.Instance).Distinct(StringComparer.Ordinal).Count();
         int seeds = rows.Select(r => r.Seed).Distinct().Count();
@@ -30,7 +30,9 @@ public sealed record ExperimentPictures(byte[]? Profile, byte[]? Quality, byte[]
         if (traced.Count > 0)
         {
             var runs = traced.Select(t => new BenchRun(t.Row.Instance, Label(t.Row.Solver, t.Row.BudgetSeconds), t.Row.Seed, t.Trace, t.Reference)).ToList();
-            quality = PlotFile.Save(QualityPlot.Create(runs), outDir, QualityPlot.FileStem, QualityPlot.Size);
+            var styles = traced.Select(t => (Label(t.Row.Solver, t.Row.BudgetSeconds), solvers.IndexOf(t.Row.Solver), budgets.IndexOf(t.Row.BudgetSeconds)))
+                .Distinct().ToDictionary(s => s.Item1, s => (s.Item2, s.Item3), StringComparer.Ordinal);
+            quality = PlotFile.Save(QualityPlot.Create(runs, label => styles[label]), outDir, QualityPlot.FileStem, QualityPlot.Size);
         }
 
         byte[]? toTarget = null;

@@ -8,6 +8,9 @@ public static class StepLines
 {
     private static readonly LinePattern[] Patterns = [LinePattern.Solid, LinePattern.Dashed, LinePattern.Dotted, LinePattern.DenselyDashed];
 
+    /// <summary>0 solid, 1 dashed, 2 dotted, 3 densely dashed, then again.</summary>
+    public static LinePattern Pattern(int k) => Patterns[k % Patterns.Length];
+
     public static void Add(Plot plot, IReadOnlyList<StepSeries> series, Func<double, double> x)
     {
         foreach (var s in series)
@@ -25,7 +28,7 @@ public static class StepLines
 
             var line = plot.Add.ScatterLine(xs, s.Y.ToArray(), Palette.Solver(s.Colour));
             line.ConnectStyle = ConnectStyle.StepHorizontal;
-            line.LinePattern = Patterns[s.Pattern % Patterns.Length];
+            line.LinePattern = Pattern(s.Pattern);
             line.LineWidth = 2.5f;
             line.LegendText = s.Label;
         }
