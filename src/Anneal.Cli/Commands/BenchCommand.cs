@@ -202,5 +202,5 @@ public static class BenchCommand
     private const string Header = "instance        solver     budget  seed  vehicles      distance  feasible  t_best(s)    gap";
 
     private static string Format(BenchRow r) => string.Create(CultureInfo.InvariantCulture,
-        $"{r.Instance,-15} {r.Solver,-10} {r.BudgetSeconds,6:0.###} {r.Seed,5} {r.Vehicles,9} {r.Distance,13:0.00}  {(r.Feasible ? "yes" : "NO"),-8} {r.SecondsToBest,9:0.0} {(r.GapPercent is { } g ? g.ToString("0.00", CultureInfo.InvariantCulture) + "%" : "-"),7}");
+        $"{r.Instance,-15} {r.Solver,-10} {r.BudgetSeconds,6:0.###} {r.Seed,5} {r.Vehicles,9} {r.Distance,13:0.00}  {(r.Feasible ? "yes" : "NO"),-8} {r.SecondsToBest,9:0.0} {(r.GapPercent is { } g ? SummaryTables.Pct(g) : "-"),7}");
 }

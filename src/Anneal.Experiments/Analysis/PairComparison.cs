@@ -14,8 +14,15 @@ public sealed record PairComparison(double Budget, string A, string B, WilcoxonR
             return "no difference on any instance";
         }
 
-        string lower = Test.Direction < 0 ? A : Test.Direction > 0 ? B : "neither";
-        string strength = Test.PValue < alpha ? string.Create(CultureInfo.InvariantCulture, $"significant at {alpha:0.##}") : "not significant";
-        return $"{lower} tends lower (better); {strength}";
+        if (Test.Direction == 0)
+        {
+            return "no tendency either way";
+        }
+
+        // The direction is the test's own (which rank sum is smaller), so it can disagree with the median difference on small samples.
+        string lower = Test.Direction < 0 ? A : B;
+        return Test.PValue < alpha
+            ? string.Create(CultureInfo.InvariantCulture, $"{lower} lower (better), significant at {alpha:0.##}")
+            : $"{lower} lower by signed ranks, not significant";
     }
 }

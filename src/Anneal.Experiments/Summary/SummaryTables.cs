@@ -56,7 +56,8 @@ public static class SummaryTables
 
     public static string Seconds(double s) => s.ToString("0.###", CultureInfo.InvariantCulture) + " s";
 
-    private static string Pct(double x) => double.IsFinite(x) ? x.ToString("0.00", CultureInfo.InvariantCulture) + "%" : "n/a";
+    // A value that rounds to zero is shown as 0.00%, not -0.00% (a plan a hair below a reference rounded to two decimals).
+    public static string Pct(double x) => !double.IsFinite(x) ? "n/a" : (Math.Abs(x) < 0.005 ? 0 : x).ToString("0.00", CultureInfo.InvariantCulture) + "%";
 
     private static string N(double x) => double.IsFinite(x) ? x.ToString("0.######", CultureInfo.InvariantCulture) : string.Empty;
 

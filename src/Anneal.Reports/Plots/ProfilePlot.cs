@@ -20,7 +20,7 @@ public static class ProfilePlot
         plot.Title($"Performance profile ({subtitle})");
         plot.XLabel("τ: objective within this factor of the best found on the instance");
         plot.YLabel("fraction of runs within τ");
-        StepLines.Add(plot, series, x => x);
+        StepLines.Add(plot, series, x => x, Alignment.LowerRight);
         plot.Axes.SetLimitsX(1 - ((tauMax - 1) * 0.02), tauMax);
         return plot;
     }

@@ -52,7 +52,8 @@ public static class QualityPlot
 
         plot.Add.HorizontalLine(0, 1, Colors.Gray, LinePattern.Dashed);
         plot.Axes.Bottom.TickGenerator = LogSecondsTicks.Create();
-        plot.ShowLegend();
+        // Gaps fall with time, so the upper right is where the curves are not.
+        plot.ShowLegend(Alignment.UpperRight);
         return plot;
     }
 }

@@ -11,7 +11,7 @@ public static class StepLines
     /// <summary>0 solid, 1 dashed, 2 dotted, 3 densely dashed, then again.</summary>
     public static LinePattern Pattern(int k) => Patterns[k % Patterns.Length];
 
-    public static void Add(Plot plot, IReadOnlyList<StepSeries> series, Func<double, double> x)
+    public static void Add(Plot plot, IReadOnlyList<StepSeries> series, Func<double, double> x, Alignment legend)
     {
         foreach (var s in series)
         {
@@ -34,6 +34,6 @@ public static class StepLines
         }
 
         plot.Axes.SetLimitsY(-0.02, 1.02);
-        plot.ShowLegend(Alignment.LowerRight);
+        plot.ShowLegend(legend);
     }
 }

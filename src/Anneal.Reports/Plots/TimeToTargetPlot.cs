@@ -21,7 +21,8 @@ public static class TimeToTargetPlot
         plot.Title($"Time to target ({subtitle})");
         plot.XLabel("elapsed seconds (log scale)");
         plot.YLabel("fraction of runs within target");
-        StepLines.Add(plot, series, s => Math.Log10(Math.Max(EarliestSeconds, s)));
+        // The curves rise to the right, so the upper left is where they are not.
+        StepLines.Add(plot, series, s => Math.Log10(Math.Max(EarliestSeconds, s)), Alignment.UpperLeft);
         plot.Axes.Bottom.TickGenerator = LogSecondsTicks.Create();
         return plot;
     }
