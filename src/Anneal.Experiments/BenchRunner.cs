@@ -8,15 +8,40 @@ using Anneal.Search.Running;
 namespace Anneal.Experiments;
 
 /// <summary>
-/// Runs solvers × instances × seeds, one solver per run, judging every plan with the evaluator, and keeps
-/// results.csv and each run's trace up to date in the output folder as runs finish.
+/// Runs an experiment plan (instances × budgets × seeds × solvers), one solver per run, judging every plan with the
+/// evaluator. Each finished run's trace is written first, then its row is added to results.csv (rewritten whole and
+/// atomically), so a row never points at a missing trace. Runs whose key is already in results.csv are skipped: an
+/// interrupted experiment continues where it stopped. A run still in flight when the experiment is cancelled is
+/// dropped, not recorded: its plan came from a cut-short budget, and recording it would pass it off as finished.
 /// </summary>
 public static class BenchRunner
 {
     public const string ResultsFile = "results.csv";
     public const string TraceFolder = "traces";
 
-    public static IReadOnlyList<BenchRow> Run(
+    /// <summary>The full plan, in the order runs are started: instance, budget, seed, solver.</summary>
+    public static IReadOnlyList<PlannedRun> Plan(IReadOnlyList<LoadedInput> inputs, BenchSettings settings)
+    {
+        var plan = new List<PlannedRun>();
+        foreach (var input in inputs)
+        {
+            var instance = input.Instance.With(objective: settings.Objective ?? input.Settings.Objective ?? input.Instance.Objective);
+            foreach (double budget in settings.Budgets)
+            {
+                for (int s = 0; s < settings.Seeds; s++)
+                {
+                    foreach (var solver in settings.Solvers)
+                    {
+                        plan.Add(new PlannedRun(instance, solver, settings.FirstSeed + s, budget));
+                    }
+                }
+            }
+        }
+
+        return plan;
+    }
+
+    public static BenchOutcome Run(
         IReadOnlyList<LoadedInput> inputs,
         BenchSettings settings,
         ReferenceValues references,
@@ -26,25 +51,20 @@ public static class BenchRunner
         CancellationToken cancel)
     {
         Directory.CreateDirectory(Path.Combine(outDir, TraceFolder));
-        var work = new List<(Instance Instance, string Solver, int Seed)>();
-        foreach (var input in inputs)
-        {
-            var instance = settings.Objective is { } o ? input.Instance.With(objective: o) : input.Instance.With(objective: input.Settings.Objective ?? input.Instance.Objective);
-            for (int s = 0; s < settings.Seeds; s++)
-            {
-                foreach (var solver in settings.Solvers)
-                {
-                    work.Add((instance, solver, settings.FirstSeed + s));
-                }
-            }
-        }
+        string resultsPath = Path.Combine(outDir, ResultsFile);
+        var rows = ResultsCsv.Read(resultsPath).ToList();
+        var done = new HashSet<RunKey>(rows.Select(RunKey.Of));
+        var plan = Plan(inputs, settings);
+        var work = plan.Where(p => !done.Contains(RunKey.Of(p))).ToList();
+        int skipped = plan.Count - work.Count, recorded = 0, dropped = 0;
 
-        var rows = new BenchRow?[work.Count];
         int next = -1;
         var gate = new object();
+        Exception? failure = null;
+        using var stop = CancellationTokenSource.CreateLinkedTokenSource(cancel);
         void Worker()
         {
-            while (!cancel.IsCancellationRequested)
+            while (!stop.IsCancellationRequested)
             {
                 int k = Interlocked.Increment(ref next);
                 if (k >= work.Count)
@@ -52,29 +72,61 @@ public static class BenchRunner
                     return;
                 }
 
-                var (instance, solver, seed) = work[k];
-                var row = RunOne(instance, solver, seed, settings, references, outDir, progress, cancel);
-                lock (gate)
+                try
                 {
-                    rows[k] = row;
-                    ResultsCsv.Write(Path.Combine(outDir, ResultsFile), rows.Where(r => r is not null)!);
-                    finished?.Invoke(row);
+                    var row = RunOne(work[k], settings, references, outDir, progress, stop.Token);
+                    lock (gate)
+                    {
+                        if (row is null)
+                        {
+                            dropped++;
+                            continue;
+                        }
+
+                        rows.Add(row);
+                        recorded++;
+                        ResultsCsv.Write(resultsPath, rows);
+                        finished?.Invoke(row);
+                    }
+                }
+                catch (Exception e)
+                {
+                    // One failing run stops the others; the error is raised on the caller's thread.
+                    lock (gate)
+                    {
+                        failure ??= e;
+                    }
+
+                    stop.Cancel();
+                    return;
                 }
             }
         }
 
-        var threads = Enumerable.Range(0, Math.Max(1, settings.Jobs)).Select(_ => new Thread(Worker) { IsBackground = true }).ToList();
+        var threads = Enumerable.Range(0, Math.Clamp(settings.Jobs, 1, Math.Max(1, work.Count))).Select(_ => new Thread(Worker) { IsBackground = true }).ToList();
         threads.ForEach(t => t.Start());
         threads.ForEach(t => t.Join());
-        return rows.Where(r => r is not null).Select(r => r!).ToList();
+        if (failure is not null)
+        {
+            System.Runtime.ExceptionServices.ExceptionDispatchInfo.Throw(failure);
+        }
+
+        return new BenchOutcome(rows, plan, skipped, recorded, dropped);
     }
 
-    private static BenchRow RunOne(Instance instance, string solverName, int seed, BenchSettings settings, ReferenceValues references, string outDir, Action<string, TracePoint>? progress, CancellationToken cancel)
+    /// <summary>One run; null when it was cancelled before it ended by itself (its result is not a finished run).</summary>
+    private static BenchRow? RunOne(PlannedRun run, BenchSettings settings, ReferenceValues references, string outDir, Action<string, TracePoint>? progress, CancellationToken cancel)
     {
-        var solver = SolverCatalog.Create(solverName);
-        var options = new SolveOptions { TimeLimit = TimeSpan.FromSeconds(settings.Seconds), IterationLimit = settings.Iterations, Seed = seed };
-        IProgress<TracePoint>? sink = progress is null ? null : new Relay(p => progress($"{instance.Name}/{solverName}/{seed}", p));
+        var instance = run.Instance;
+        var solver = SolverCatalog.Create(run.Solver);
+        var options = new SolveOptions { TimeLimit = TimeSpan.FromSeconds(run.BudgetSeconds), IterationLimit = settings.Iterations, Seed = run.Seed, Threads = 1 };
+        IProgress<TracePoint>? sink = progress is null ? null : new Relay(p => progress($"{instance.Name}/{run.Solver}/{run.Seed}", p));
         var result = solver.Solve(instance, options, sink, cancel);
+        if (cancel.IsCancellationRequested)
+        {
+            return null;
+        }
+
         var evaluation = PlanEvaluator.Evaluate(instance, result.Plan);
         var reference = references.Find(instance);
         double? gap = reference is null || evaluation.Routes.Count == 0 ? null : (evaluation.Distance / reference.Value - 1) * 100;
@@ -83,10 +135,11 @@ public static class BenchRunner
             gap = (evaluation.Objective / reference.Value - 1) * 100;
         }
 
-        string traceName = string.Create(CultureInfo.InvariantCulture, $"{Safe(instance.Name)}-{solverName}-s{seed}-{settings.Seconds:0.###}s.csv");
+        string traceName = string.Create(CultureInfo.InvariantCulture,
+            $"{Safe(instance.Name)}-{Safe(run.Solver)}-s{run.Seed}-{RunKey.BudgetText(run.BudgetSeconds)}s-{run.Objective}.csv");
         TraceCsvWriter.Write(Path.Combine(outDir, TraceFolder, traceName),
-            result.Trace.Select(p => new TraceRow(solverName, p.Seconds, p.Iteration, p.BestObjective, p.CurrentObjective, p.BestFeasible, p.State)));
-        return new BenchRow(instance.Name, solverName, seed, settings.Seconds, instance.Objective.ToText(), evaluation.Objective,
+            result.Trace.Select(p => new TraceRow(run.Solver, p.Seconds, p.Iteration, p.BestObjective, p.CurrentObjective, p.BestFeasible, p.State)));
+        return new BenchRow(instance.Name, run.Solver, run.Seed, run.BudgetSeconds, run.Objective, evaluation.Objective,
             evaluation.VehiclesUsed, evaluation.Distance, evaluation.Feasible, result.SecondsToBest, result.Seconds,
             reference?.Value, reference?.Vehicles, gap, Path.Combine(TraceFolder, traceName));
     }
@@ -96,7 +149,7 @@ public static class BenchRunner
         var chars = name.ToCharArray();
         for (int i = 0; i < chars.Length; i++)
         {
-            if (!char.IsLetterOrDigit(chars[i]) && chars[i] != '-' && chars[i] != '_')
+            if (!char.IsLetterOrDigit(chars[i]) && chars[i] != '-' && chars[i] != '_' && chars[i] != '.')
             {
                 chars[i] = '_';
             }

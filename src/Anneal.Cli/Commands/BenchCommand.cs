@@ -3,38 +3,47 @@ using System.Globalization;
 using Anneal.Cli.Reporting;
 using Anneal.Core.Model;
 using Anneal.Experiments;
+using Anneal.Experiments.Summary;
 using Anneal.Formats.Input;
 using Anneal.Search.Diagnostics;
 using Anneal.Search.Running;
 
 namespace Anneal.Cli.Commands;
 
-/// <summary>`anneal bench`: solvers × instances × seeds with one budget; a results table, gaps to reference values and the kernel's throughput.</summary>
+/// <summary>
+/// `anneal bench`: an experiment of instances × solvers × seeds × budgets, from the command line or an experiment
+/// file (the command line overrides it); resumable into the same folder; statistics, pictures and summaries at the end.
+/// </summary>
 public static class BenchCommand
 {
     public static Command Create(CliContext context)
     {
-        var inputs = new Argument<string[]>("inputs") { Description = "Benchmark files, folders of them, or CSV job folders.", Arity = ArgumentArity.OneOrMore };
+        var inputs = new Argument<string[]>("inputs") { Description = "Benchmark files, folders of them, CSV job folders, or globs of these (optional with --experiment).", Arity = ArgumentArity.ZeroOrMore };
+        var experiment = new Option<string?>("--experiment") { Description = "JSON experiment file (instances, solvers, seeds, budgets, objective, reference, jobs, out); options given here override it.", HelpName = "file" };
         var solvers = new Option<string>("--solvers") { Description = "Comma-separated solver names.", DefaultValueFactory = _ => "sa,tabu", HelpName = "list" };
-        var seeds = new Option<int>("--seeds") { Description = "Seeds per solver and instance (1, 2, …).", DefaultValueFactory = _ => 3, HelpName = "n" };
-        var time = new Option<double>("--time") { Description = "Wall-clock budget per run, seconds.", DefaultValueFactory = _ => 10, HelpName = "seconds" };
+        var seeds = new Option<int>("--seeds") { Description = "Seeds per solver, instance and budget (1, 2, …).", DefaultValueFactory = _ => 3, HelpName = "n" };
+        var time = new Option<string>("--time") { Description = "Wall-clock budget per run in seconds; several, comma-separated, run each.", DefaultValueFactory = _ => "10", HelpName = "s[,s…]" };
         var iterations = new Option<long?>("--iterations") { Description = "Also stop each run after this many iterations.", HelpName = "n" };
         var objective = SharedOptions.Objective();
-        var reference = new Option<string?>("--reference") { Description = "CSV of best-known values (the format of ../shared/benchmarks/bks.csv); gaps are measured against it.", HelpName = "csv" };
-        var jobs = new Option<int>("--jobs") { Description = "Runs at once (one solver per core keeps timings fair).", DefaultValueFactory = _ => 1, HelpName = "n" };
-        var output = SharedOptions.Out("Output folder for results.csv and traces/. Default: runs/bench-<yyyyMMdd-HHmmss>.");
+        var reference = new Option<string?>("--reference") { Description = "CSV of best-known values (the format of ../shared/benchmarks/bks.csv); without one, gaps are to the best found in the experiment.", HelpName = "csv" };
+        var jobs = new Option<int>("--jobs") { Description = "Runs at once, one solver per core; more than the cores makes timings unfair.", DefaultValueFactory = _ => 1, HelpName = "n" };
+        var output = SharedOptions.Out("Output folder; running again into the same folder skips runs already in its results.csv. Default: runs/bench-<yyyyMMdd-HHmmss>.");
         var throughput = new Option<double>("--throughput-seconds") { Description = "Seconds spent measuring move evaluations per second on the largest instance (0 skips it).", DefaultValueFactory = _ => 2, HelpName = "seconds" };
         var quiet = new Option<bool>("--quiet") { Description = "No line per finished run." };
-        var command = new Command("bench", "Benchmark solvers on instances: results.csv, a table with gaps to reference values, and move-evaluation throughput.");
+        var command = new Command("bench", "Compare solvers: an experiment of instances × solvers × seeds × budgets; results.csv, statistics, pictures and a summary.");
         command.Arguments.Add(inputs);
-        foreach (Option option in new Option[] { solvers, seeds, time, iterations, objective, reference, jobs, output, throughput, quiet })
+        foreach (Option option in new Option[] { experiment, solvers, seeds, time, iterations, objective, reference, jobs, output, throughput, quiet })
         {
             command.Options.Add(option);
         }
 
         command.SetAction(parse =>
         {
-            var names = parse.GetValue(solvers)!.Split(',', StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries);
+            bool Given(Option option) => parse.GetResult(option) is { Implicit: false };
+            var file = parse.GetValue(experiment) is { } path ? ExperimentFile.Read(path) : new ExperimentFile();
+            var names = Given(solvers) || file.Solvers is null
+                ? parse.GetValue(solvers)!.Split(',', StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries)
+                : file.Solvers.ToArray();
             var unknown = names.FirstOrDefault(n => !SolverCatalog.Exists(n));
             if (unknown is not null || names.Length == 0)
             {
@@ -42,56 +51,121 @@ public static class BenchCommand
                 return ExitCodes.InvalidInput;
             }
 
-            if (parse.GetValue(seeds) < 1 || parse.GetValue(jobs) < 1 || !(parse.GetValue(time) > 0))
+            var budgets = Given(time) || file.Budgets is null ? ParseBudgets(parse.GetValue(time)!) : file.Budgets;
+            int seedCount = Given(seeds) ? parse.GetValue(seeds) : file.Seeds ?? parse.GetValue(seeds);
+            int jobCount = Given(jobs) ? parse.GetValue(jobs) : file.Jobs ?? parse.GetValue(jobs);
+            if (seedCount < 1 || jobCount < 1 || budgets is null || budgets.Count == 0 || budgets.Any(b => !(b > 0)))
             {
-                context.Err.WriteLine("anneal: --seeds and --jobs must be at least 1 and --time positive");
+                context.Err.WriteLine("anneal: --seeds and --jobs must be at least 1 and --time one or more positive numbers of seconds, comma-separated");
                 return ExitCodes.InvalidInput;
             }
 
+            string? objectiveText = Given(objective) ? parse.GetValue(objective) : file.Objective ?? parse.GetValue(objective);
             Objective? chosen = null;
-            if (parse.GetValue(objective) is { } text && ObjectiveNames.TryParse(text, out var o))
+            if (objectiveText is not null)
             {
+                if (!ObjectiveNames.TryParse(objectiveText, out var o))
+                {
+                    context.Err.WriteLine($"anneal: unknown objective '{objectiveText}'; use {ObjectiveNames.Accepted}");
+                    return ExitCodes.InvalidInput;
+                }
+
                 chosen = o;
+            }
+
+            var paths = parse.GetValue(inputs) is { Length: > 0 } given ? given : file.Instances;
+            if (paths.Count == 0)
+            {
+                context.Err.WriteLine("anneal: give instances (files, folders or globs) or an --experiment file that lists them");
+                return ExitCodes.InvalidInput;
             }
 
             var settings = new BenchSettings
             {
                 Solvers = names,
-                Seeds = parse.GetValue(seeds),
-                Seconds = parse.GetValue(time),
-                Iterations = parse.GetValue(iterations),
+                Seeds = seedCount,
+                FirstSeed = file.FirstSeed ?? 1,
+                Budgets = budgets.Distinct().ToList(),
+                Iterations = Given(iterations) ? parse.GetValue(iterations) : file.Iterations,
                 Objective = chosen,
-                Jobs = parse.GetValue(jobs),
+                Jobs = jobCount,
             };
-            var refs = parse.GetValue(reference) is { } path ? ReferenceValues.Read(path) : ReferenceValues.Empty;
-            var loaded = InputDiscovery.Expand(parse.GetValue(inputs)!).Select(InputLoader.Load).ToList();
-            string folder = OutputFolder.Create(parse.GetValue(output) ?? OutputFolder.Default(context.WorkingDirectory, "bench", context.Now()));
-            return Execute(loaded, settings, refs, folder, parse.GetValue(throughput), parse.GetValue(quiet), context);
+            string? referencePath = Given(reference) ? parse.GetValue(reference) : file.Reference;
+            var refs = referencePath is { } rp ? ReferenceValues.Read(rp) : ReferenceValues.Empty;
+            var loaded = InputDiscovery.Expand(paths).Select(InputLoader.Load).ToList();
+            string folder = OutputFolder.Create((Given(output) ? parse.GetValue(output) : file.Out) ?? OutputFolder.Default(context.WorkingDirectory, "bench", context.Now()));
+            return Execute(loaded, settings, refs, referencePath, folder, parse.GetValue(throughput), parse.GetValue(quiet), context);
         });
         return command;
     }
 
-    public static int Execute(IReadOnlyList<LoadedInput> inputs, BenchSettings settings, ReferenceValues refs, string folder, double throughputSeconds, bool quiet, CliContext context)
+    /// <summary>"5,30" → [5, 30]; null when a part is not a number.</summary>
+    public static IReadOnlyList<double>? ParseBudgets(string text)
     {
-        var w = context.Out;
-        w.WriteLine(string.Create(CultureInfo.InvariantCulture,
-            $"Benchmark: {inputs.Count} instance(s) × {settings.Solvers.Count} solver(s) × {settings.Seeds} seed(s), {settings.Seconds:0.##} s per run, {settings.Jobs} at a time; reference values: {refs.Count}."));
-        using var stop = CancellationTokenSource.CreateLinkedTokenSource(context.Cancel);
-        using var signals = context.HandleSignals ? new ShutdownSignals(stop) : null;
-        w.WriteLine(Header);
-        var rows = BenchRunner.Run(inputs, settings, refs, folder, quiet ? null : row => w.WriteLine(Format(row)), null, stop.Token);
-        if (quiet)
+        var budgets = new List<double>();
+        foreach (var part in text.Split(',', StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries))
         {
-            foreach (var row in rows)
+            if (!double.TryParse(part, NumberStyles.Float, CultureInfo.InvariantCulture, out double b))
             {
-                w.WriteLine(Format(row));
+                return null;
             }
+
+            budgets.Add(b);
         }
 
-        w.WriteLine();
-        foreach (var line in BenchSummary.Lines(rows))
+        return budgets;
+    }
+
+    public static int Execute(IReadOnlyList<LoadedInput> inputs, BenchSettings settings, ReferenceValues refs, string? referencePath, string folder, double throughputSeconds, bool quiet, CliContext context)
+    {
+        var w = context.Out;
+        var machine = MachineInfo.Current(settings.Jobs, new DateTimeOffset(context.Now()));
+        w.WriteLine(string.Create(CultureInfo.InvariantCulture,
+            $"Benchmark: {inputs.Count} instance(s) × {settings.Solvers.Count} solver(s) × {settings.Seeds} seed(s) × budgets {string.Join(", ", settings.Budgets.Select(SummaryTables.Seconds))}; {settings.Jobs} at a time; reference values: {refs.Count}."));
+        if (machine.Oversubscribed)
         {
-            w.WriteLine(line);
+            w.WriteLine($"Note: {settings.Jobs} runs at once on {machine.ProcessorCount} processors: solvers share cores, so their timings are not fair.");
+        }
+
+        machine.Append(folder);
+        using var stop = CancellationTokenSource.CreateLinkedTokenSource(context.Cancel);
+        using var signals = context.HandleSignals ? new ShutdownSignals(stop) : null;
+        var lines = new List<string>();
+        if (!quiet)
+        {
+            w.WriteLine(Header);
+        }
+
+        var outcome = BenchRunner.Run(inputs, settings, refs, folder, row =>
+        {
+            lines.Add(Format(row));
+            if (!quiet)
+            {
+                w.WriteLine(lines[^1]);
+            }
+        }, null, stop.Token);
+        if (outcome.Skipped > 0)
+        {
+            w.WriteLine($"Resumed: {outcome.Skipped} of {outcome.Plan.Count} planned runs were already in results.csv and were skipped.");
+        }
+
+        if (stop.IsCancellationRequested)
+        {
+            w.WriteLine($"Interrupted: {outcome.Finished} run(s) finished and recorded; {outcome.Dropped} in flight were dropped; {outcome.Missing} remain. Run the same command again to continue.");
+        }
+
+        var stats = ExperimentReport.Write(folder, outcome, machine, referencePath);
+        w.WriteLine();
+        WriteTable(w, SummaryTables.Configs(stats));
+        if (stats.Pairs.Count > 0)
+        {
+            w.WriteLine();
+            WriteTable(w, SummaryTables.Pairs(stats));
+        }
+
+        if (stats.WithoutReference.Count > 0)
+        {
+            w.WriteLine($"{stats.WithoutReference.Count} instance(s) have no reference value: their gaps are to the best found across this experiment.");
         }
 
         if (throughputSeconds > 0 && inputs.Count > 0 && !stop.IsCancellationRequested)
@@ -101,12 +175,32 @@ public static class BenchCommand
             w.WriteLine(string.Create(CultureInfo.InvariantCulture, $"move evaluations: {rate / 1e6:0.00} million per second on one core ({largest.Name}, {largest.StopCount} stops)"));
         }
 
-        w.WriteLine($"Written: {Path.Combine(folder, BenchRunner.ResultsFile)}");
+        w.WriteLine($"Written: {Path.Combine(folder, BenchRunner.ResultsFile)}, {HtmlSummary.FileName}, {MarkdownSummary.FileName} and pictures in {folder}");
         return stop.IsCancellationRequested ? ExitCodes.Interrupted : ExitCodes.Success;
     }
 
-    private const string Header = "instance        solver      seed  vehicles      distance  feasible  t_best(s)    gap";
+    /// <summary>A table for the console: columns padded to their widest cell.</summary>
+    private static void WriteTable(TextWriter w, SummaryTable table)
+    {
+        var widths = table.Headers.Select(h => h.Length).ToArray();
+        foreach (var row in table.Rows)
+        {
+            for (int i = 0; i < row.Count; i++)
+            {
+                widths[i] = Math.Max(widths[i], row[i].Length);
+            }
+        }
+
+        string Line(IReadOnlyList<string> cells) => string.Join("  ", cells.Select((c, i) => table.Numeric[i] ? c.PadLeft(widths[i]) : c.PadRight(widths[i]))).TrimEnd();
+        w.WriteLine(Line(table.Headers));
+        foreach (var row in table.Rows)
+        {
+            w.WriteLine(Line(row));
+        }
+    }
+
+    private const string Header = "instance        solver     budget  seed  vehicles      distance  feasible  t_best(s)    gap";
 
     private static string Format(BenchRow r) => string.Create(CultureInfo.InvariantCulture,
-        $"{r.Instance,-15} {r.Solver,-10} {r.Seed,5} {r.Vehicles,9} {r.Distance,13:0.00}  {(r.Feasible ? "yes" : "NO"),-8} {r.SecondsToBest,9:0.0} {(r.GapPercent is { } g ? g.ToString("0.00", CultureInfo.InvariantCulture) + "%" : "-"),7}");
+        $"{r.Instance,-15} {r.Solver,-10} {r.BudgetSeconds,6:0.###} {r.Seed,5} {r.Vehicles,9} {r.Distance,13:0.00}  {(r.Feasible ? "yes" : "NO"),-8} {r.SecondsToBest,9:0.0} {(r.GapPercent is { } g ? SummaryTables.Pct(g) : "-"),7}");
 }

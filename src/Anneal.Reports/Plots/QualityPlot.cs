@@ -9,7 +9,8 @@ public static class QualityPlot
     public const string FileStem = "quality";
     public static readonly PixelSize Size = new(1000, 560);
 
-    public static Plot Create(IReadOnlyList<BenchRun> runs)
+    /// <param name="style">Colour and line pattern (as <see cref="StepLines.Pattern"/>) per curve name, so that a solver keeps its colour across pictures; by default curves are coloured in name order.</param>
+    public static Plot Create(IReadOnlyList<BenchRun> runs, Func<string, (int Colour, int Pattern)>? style = null)
     {
         var curves = GapCurves.Compute(runs);
         var plot = new Plot();
@@ -20,7 +21,9 @@ public static class QualityPlot
         int k = 0;
         foreach (var (solver, points) in curves.OrderBy(c => c.Key, StringComparer.Ordinal))
         {
-            var color = Palette.Solver(k++);
+            var (colour, pattern) = style?.Invoke(solver) ?? (k, 0);
+            k++;
+            var color = Palette.Solver(colour);
             if (points.Count == 0)
             {
                 continue;
@@ -43,12 +46,14 @@ public static class QualityPlot
             band.LineWidth = 0;
             var line = plot.Add.ScatterLine(xs, median, color);
             line.LineWidth = 2.5f;
+            line.LinePattern = StepLines.Pattern(pattern);
             line.LegendText = solver;
         }
 
         plot.Add.HorizontalLine(0, 1, Colors.Gray, LinePattern.Dashed);
         plot.Axes.Bottom.TickGenerator = LogSecondsTicks.Create();
-        plot.ShowLegend();
+        // Gaps fall with time, so the upper right is where the curves are not.
+        plot.ShowLegend(Alignment.UpperRight);
         return plot;
     }
 }

@@ -1,0 +1,67 @@
+using System.Globalization;
+using Anneal.Experiments.Analysis;
+
+namespace Anneal.Experiments.Summary;
+
+/// <summary>The statistics as tables: the same cells go to the console, summary.md, summary.html and the CSV files.</summary>
+public static class SummaryTables
+{
+    public static SummaryTable Configs(ExperimentStatistics stats) => new(
+        ["solver", "budget", "runs", "feasible", "median gap", "IQR (Q1 – Q3)", "mean gap [95% CI]", "best on"],
+        stats.Configs.Select(c => (IReadOnlyList<string>)
+        [
+            c.Solver, Seconds(c.Budget), I(c.Runs), I(c.Feasible), Pct(c.Gap.Median),
+            c.Gap.Count == 0 ? "n/a" : $"{Pct(c.Gap.Iqr)} ({Pct(c.Gap.Q1)} – {Pct(c.Gap.Q3)})",
+            c.Gap.Count == 0 ? "n/a" : c.Gap.Count < 2 ? $"{Pct(c.Gap.Mean)} [n/a]" : $"{Pct(c.Gap.Mean)} [{Pct(c.Gap.CiLow)}, {Pct(c.Gap.CiHigh)}]",
+            $"{I(c.BestCount)} of {I(c.Instances)}",
+        ]).ToList(),
+        [false, true, true, true, true, true, true, true]);
+
+    public static SummaryTable Pairs(ExperimentStatistics stats) => new(
+        ["budget", "A", "B", "instances", "median A − B", "W+", "W−", "p (two-sided)", "method", "verdict"],
+        stats.Pairs.Select(p => (IReadOnlyList<string>)
+        [
+            Seconds(p.Budget), p.A, p.B, I(p.Test.Pairs + p.Test.Zeros), Pct(p.Test.MedianDifference), N(p.Test.WPlus), N(p.Test.WMinus),
+            double.IsNaN(p.Test.PValue) ? "n/a" : p.Test.PValue.ToString("0.0000", CultureInfo.InvariantCulture),
+            p.Test.Exact ? "exact" : "normal approx.", p.Verdict(),
+        ]).ToList(),
+        [true, false, false, true, true, true, true, true, false, false]);
+
+    /// <summary>statistics.csv: one row per solver and budget, plain numbers for other tools.</summary>
+    public static IReadOnlyList<string> ConfigCsv(ExperimentStatistics stats)
+    {
+        var lines = new List<string> { "solver,budget_s,runs,feasible,gap_runs,median_gap_pct,q1_gap_pct,q3_gap_pct,iqr_gap_pct,mean_gap_pct,ci95_low_pct,ci95_high_pct,best_on,instances" };
+        foreach (var c in stats.Configs)
+        {
+            lines.Add(string.Join(',', Csv(c.Solver), N(c.Budget), I(c.Runs), I(c.Feasible), I(c.Gap.Count), N(c.Gap.Median), N(c.Gap.Q1), N(c.Gap.Q3), N(c.Gap.Iqr),
+                N(c.Gap.Mean), N(c.Gap.CiLow), N(c.Gap.CiHigh), I(c.BestCount), I(c.Instances)));
+        }
+
+        return lines;
+    }
+
+    /// <summary>comparisons.csv: one row per pair of solvers and budget.</summary>
+    public static IReadOnlyList<string> PairCsv(ExperimentStatistics stats)
+    {
+        var lines = new List<string> { "budget_s,solver_a,solver_b,pairs,zeros,median_diff_pct,w_plus,w_minus,p_value,exact,z,lower" };
+        foreach (var p in stats.Pairs)
+        {
+            string lower = p.Test.Direction < 0 ? p.A : p.Test.Direction > 0 ? p.B : string.Empty;
+            lines.Add(string.Join(',', N(p.Budget), Csv(p.A), Csv(p.B), I(p.Test.Pairs), I(p.Test.Zeros), N(p.Test.MedianDifference), N(p.Test.WPlus), N(p.Test.WMinus),
+                N(p.Test.PValue), p.Test.Exact ? "true" : "false", p.Test.Z is { } z ? N(z) : string.Empty, Csv(lower)));
+        }
+
+        return lines;
+    }
+
+    public static string Seconds(double s) => s.ToString("0.###", CultureInfo.InvariantCulture) + " s";
+
+    // A value that rounds to zero is shown as 0.00%, not -0.00% (a plan a hair below a reference rounded to two decimals).
+    public static string Pct(double x) => !double.IsFinite(x) ? "n/a" : (Math.Abs(x) < 0.005 ? 0 : x).ToString("0.00", CultureInfo.InvariantCulture) + "%";
+
+    private static string N(double x) => double.IsFinite(x) ? x.ToString("0.######", CultureInfo.InvariantCulture) : string.Empty;
+
+    private static string I(int x) => x.ToString(CultureInfo.InvariantCulture);
+
+    private static string Csv(string text) => text.Contains(',') || text.Contains('"') ? "\"" + text.Replace("\"", "\"\"") + "\"" : text;
+}
