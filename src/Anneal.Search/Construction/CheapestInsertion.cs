@@ -15,6 +15,8 @@ public static class CheapestInsertion
     {
         var move = default(MoveDraft);
         var best = default(MoveDraft);
+        var types = VehicleTypes(state.Instance);
+        var seen = new bool[types.Length == 0 ? 0 : types.Max() + 1];
         foreach (int u in order)
         {
             if (cancel.IsCancellationRequested)
@@ -41,15 +43,15 @@ public static class CheapestInsertion
                 Consider(state, ref move, ref best, ref bestDelta, MoveBuilder.Insert(state, ref move, u, v, after: false));
             }
 
-            int empty = FirstEmptyRoute(state);
-            if (empty >= 0)
+            // One empty vehicle of each kind: a refrigerated stop needs a refrigerated van even when box vans are free.
+            foreach (int empty in EmptyRoutePerType(state, types, seen))
             {
                 Consider(state, ref move, ref best, ref bestDelta, MoveBuilder.Insert(state, ref move, u, -1, false, empty));
             }
 
-            if (!routedNeighbour || double.IsPositiveInfinity(bestDelta))
+            if (!routedNeighbour || bestDelta >= BreakSurcharge)
             {
-                // Every route is full of strangers: try every position once.
+                // No good position near the stop's neighbours: try every position once.
                 for (int r = 0; r < state.RouteCount; r++)
                 {
                     for (int p = 0; p < state.Length(r); p++)
@@ -88,6 +90,43 @@ public static class CheapestInsertion
 
     private const double BreakSurcharge = 1e18;
 
+    /// <summary>Vehicles that differ in nothing a route's cost or feasibility depends on share a type number.</summary>
+    public static int[] VehicleTypes(Core.Model.Instance instance)
+    {
+        var keys = new Dictionary<string, int>(StringComparer.Ordinal);
+        var types = new int[instance.Vehicles.Count];
+        for (int v = 0; v < types.Length; v++)
+        {
+            var x = instance.Vehicles[v];
+            string key = string.Join('|', x.StartDepot, x.EndDepot, string.Join(',', x.Capacity), x.ShiftStart, x.ShiftEnd, x.MaxDuration, x.FixedCost, x.CostPerDistance, x.CostPerHour, x.Skills);
+            if (!keys.TryGetValue(key, out int t))
+            {
+                t = keys.Count;
+                keys[key] = t;
+            }
+
+            types[v] = t;
+        }
+
+        return types;
+    }
+
+    private static List<int> EmptyRoutePerType(SearchState state, int[] types, bool[] seen)
+    {
+        Array.Clear(seen);
+        var found = new List<int>();
+        for (int r = 0; r < state.RouteCount && found.Count < seen.Length; r++)
+        {
+            if (state.Length(r) == 0 && !seen[types[r]])
+            {
+                seen[types[r]] = true;
+                found.Add(r);
+            }
+        }
+
+        return found;
+    }
+
     /// <summary>An unused vehicle, or -1 when every vehicle has a route.</summary>
     public static int FirstEmptyRoute(SearchState state)
     {
@@ -102,7 +141,7 @@ public static class CheapestInsertion
         return -1;
     }
 
-    /// <summary>Farthest stops from their depot first: they are the hardest to fit late (common practice for seeding).</summary>
+    /// <summary>Stops needing skills first, then the farthest from the depot: they are the hardest to fit late (common practice for seeding).</summary>
     public static int[] FarthestFirst(Core.Model.Instance instance)
     {
         int n = instance.StopCount;
@@ -112,7 +151,8 @@ public static class CheapestInsertion
         for (int i = 0; i < n; i++)
         {
             order[i] = i;
-            key[i] = -instance.Travel.Distance(depot, i);
+            // Stops that need a skill go first, while the few vehicles that have it still have room.
+            key[i] = -instance.Travel.Distance(depot, i) - (instance.Stops[i].RequiredSkills != 0 ? 1e12 : 0);
         }
 
         Array.Sort(key, order);
