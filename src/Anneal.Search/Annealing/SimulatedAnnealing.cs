@@ -14,7 +14,7 @@ namespace Anneal.Search.Annealing;
 /// sampled move deltas; cooling is geometric in the fraction of the budget used, so a 10 s and a 10 min run both
 /// finish cold; on stagnation the search returns to the best plan and reheats; hard-rule prices adapt.
 /// </summary>
-public sealed class SimulatedAnnealing : ISolver
+public sealed class SimulatedAnnealing : SeededSearch
 {
     private readonly AnnealingSettings _settings;
 
@@ -23,15 +23,10 @@ public sealed class SimulatedAnnealing : ISolver
         _settings = settings ?? new AnnealingSettings();
     }
 
-    public string Name => "sa";
+    public override string Name => "sa";
 
-    public SolverResult Solve(Instance instance, SolveOptions options, IProgress<TracePoint>? progress, CancellationToken cancel)
+    protected override SolverResult SolveOnce(Instance instance, SolveOptions options, IProgress<TracePoint>? progress, CancellationToken cancel)
     {
-        if (options.Threads > 1)
-        {
-            return ParallelRuns.Run(() => new SimulatedAnnealing(_settings), instance, options, progress, cancel);
-        }
-
         var start = SearchStart.Begin(instance, options, _settings.Neighbours, progress, cancel);
         var (budget, trace, candidates, state) = start;
         var adapter = start.Prices(0.2);

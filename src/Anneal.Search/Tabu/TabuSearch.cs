@@ -15,7 +15,7 @@ namespace Anneal.Search.Tabu;
 /// attributes used often (diversification). Move evaluations are cached per stop pair and recomputed only when one
 /// of the two routes changed, split by rule so that changing prices needs no re-evaluation.
 /// </summary>
-public sealed class TabuSearch : ISolver
+public sealed class TabuSearch : SeededSearch
 {
     private const int Kinds = 5;
     private readonly TabuSettings _settings;
@@ -25,15 +25,10 @@ public sealed class TabuSearch : ISolver
         _settings = settings ?? new TabuSettings();
     }
 
-    public string Name => "tabu";
+    public override string Name => "tabu";
 
-    public SolverResult Solve(Instance instance, SolveOptions options, IProgress<TracePoint>? progress, CancellationToken cancel)
+    protected override SolverResult SolveOnce(Instance instance, SolveOptions options, IProgress<TracePoint>? progress, CancellationToken cancel)
     {
-        if (options.Threads > 1)
-        {
-            return ParallelRuns.Run(() => new TabuSearch(_settings), instance, options, progress, cancel);
-        }
-
         var start = SearchStart.Begin(instance, options, _settings.Neighbours, progress, cancel);
         var run = new Run(this, start, new Random(options.Seed));
         run.Loop(options.TargetObjective);
