@@ -55,9 +55,7 @@ public static class MoveBuilder
         }
 
         m.RouteCount = 2;
-        m.A.Clear(ru);
-        m.A.Add(Piece.Range(ru, 0, pu - 1));
-        m.A.Add(Piece.Range(ru, end + 1, s.Length(ru) - 1));
+        Without(s, ref m.A, ru, pu, end);
         m.B.Clear(rv);
         m.B.Add(Piece.Range(rv, 0, gap - 1));
         m.B.Add(Piece.Range(ru, pu, end));
@@ -77,9 +75,7 @@ public static class MoveBuilder
         int pu = s.PositionOf(u);
         m.Reset(MoveKind.Relocate);
         m.RouteCount = 2;
-        m.A.Clear(ru);
-        m.A.Add(Piece.Range(ru, 0, pu - 1));
-        m.A.Add(Piece.Range(ru, pu + 1, s.Length(ru) - 1));
+        Without(s, ref m.A, ru, pu, pu);
         m.B.Clear(emptyRoute);
         m.B.Add(Piece.Range(ru, pu, pu));
         return true;
@@ -201,9 +197,7 @@ public static class MoveBuilder
         int pu = s.PositionOf(u);
         m.Reset(MoveKind.Drop);
         m.RouteCount = 1;
-        m.A.Clear(ru);
-        m.A.Add(Piece.Range(ru, 0, pu - 1));
-        m.A.Add(Piece.Range(ru, pu + 1, s.Length(ru) - 1));
+        Without(s, ref m.A, ru, pu, pu);
         m.Dropped = u;
         return true;
     }
@@ -243,5 +237,13 @@ public static class MoveBuilder
         m.A.Add(Piece.Single(u));
         m.A.Add(Piece.Range(rv, gap, s.Length(rv) - 1));
         return true;
+    }
+
+    /// <summary>The route as it is, less positions from..to.</summary>
+    private static void Without(SearchState s, ref RouteDraft draft, int route, int from, int to)
+    {
+        draft.Clear(route);
+        draft.Add(Piece.Range(route, 0, from - 1));
+        draft.Add(Piece.Range(route, to + 1, s.Length(route) - 1));
     }
 }
