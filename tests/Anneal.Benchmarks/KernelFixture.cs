@@ -2,6 +2,7 @@ using Anneal.Core.Model;
 using Anneal.Search.Construction;
 using Anneal.Search.Moves;
 using Anneal.Search.Neighbourhoods;
+using Anneal.Search.Randomness;
 using Anneal.Search.Representation;
 
 namespace Anneal.Benchmarks;
@@ -31,7 +32,7 @@ public sealed class KernelFixture
         var candidates = new CandidateLists(instance, CandidateCount);
         var state = InsertionSolver.Build(instance, candidates);
         CheckPath(name, instance, state);
-        return new KernelFixture(instance, state, new MoveSampler(state, candidates, new Random(seed)));
+        return new KernelFixture(instance, state, new MoveSampler(state, candidates, new SearchRandom(seed)));
     }
 
     /// <summary>A fixed set of moves the sampler offers (draws it declines are skipped), so a benchmark can time evaluation alone.</summary>

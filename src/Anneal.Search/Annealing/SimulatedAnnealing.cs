@@ -2,6 +2,7 @@ using Anneal.Core.Model;
 using Anneal.Search.Construction;
 using Anneal.Search.Moves;
 using Anneal.Search.Neighbourhoods;
+using Anneal.Search.Randomness;
 using Anneal.Search.Representation;
 using Anneal.Search.Running;
 using Anneal.Search.Strategy;
@@ -30,14 +31,14 @@ public sealed class SimulatedAnnealing : SeededSearch
         var start = SearchStart.Begin(instance, options, _settings.Neighbours, progress, cancel);
         var (budget, trace, candidates, state) = start;
         var adapter = start.Prices(0.2);
-        var rng = new Random(options.Seed);
+        var rng = new SearchRandom(options.Seed);
         var keeper = new BestKeeper(state);
         var sampler = new MoveSampler(state, candidates, rng);
         trace.Improved(Point(budget, 0, keeper, state, "construction"));
 
-        bool reduceVehicles = RouteElimination.Applies(instance);
-        double startTemperature = Calibrate(state, sampler, _settings.StartAcceptance);
-        double endTemperature = startTemperature * _settings.EndRatio;
+        var phase = new FleetPhase(RouteElimination.Applies(instance), _settings.FleetShare, _settings.FleetPatience);
+        double firstTemperature = Calibrate(state, sampler, _settings.StartAcceptance);
+        double startTemperature = firstTemperature;
         double temperature = startTemperature;
         double boost = 0;
         double lastImprovedAt = 0;
@@ -49,17 +50,35 @@ public sealed class SimulatedAnnealing : SeededSearch
             if ((iteration & 1023) == 0)
             {
                 double p = budget.Progress(iteration);
+                if (phase.Due(p))
+                {
+                    // The fleet is settled: anneal distance afresh from the best plan, warm but not so hot as to undo it.
+                    if (Restart.Settle(state, keeper, adapter, candidates, phase, p, rng))
+                    {
+                        trace.Improved(Point(budget, iteration, keeper, state, "repaired"));
+                    }
+
+                    startTemperature = firstTemperature * _settings.DistanceStartRatio;
+                    boost = 0;
+                    lastImprovedAt = p;
+                }
+
+                double q = phase.Within(p);
                 boost *= 0.9;
-                temperature = startTemperature * Math.Pow(endTemperature / startTemperature, p) * (1 + boost);
+                temperature = startTemperature * Math.Pow(_settings.EndRatio, q) * (1 + boost);
                 if ((iteration & 4095) == 0)
                 {
                     adapter.Update(state);
                 }
 
-                double stagnation = reduceVehicles ? _settings.StagnationFraction / 2 : _settings.StagnationFraction;
-                if (p - lastImprovedAt > stagnation && p < 0.85)
+                double stagnation = phase.Eliminating ? _settings.StagnationFraction / 2 : _settings.StagnationFraction;
+                if (p - lastImprovedAt > stagnation && q < 0.85)
                 {
-                    Restart.FromBest(state, keeper, adapter, reduceVehicles && p < 0.7, rng);
+                    if (Restart.AfterStall(state, keeper, adapter, candidates, phase, p, rng))
+                    {
+                        trace.Improved(Point(budget, iteration, keeper, state, "repaired"));
+                    }
+
                     boost = _settings.ReheatBoost;
                     lastImprovedAt = p;
                 }
@@ -85,6 +104,7 @@ public sealed class SimulatedAnnealing : SeededSearch
             if (keeper.Offer(state))
             {
                 lastImprovedAt = budget.Progress(iteration);
+                phase.NewBest(state, lastImprovedAt);
                 trace.Improved(Point(budget, iteration, keeper, state, $"T={temperature:G4}"));
                 if (options.TargetObjective is { } target && keeper.HasFeasible && keeper.Objective <= target)
                 {

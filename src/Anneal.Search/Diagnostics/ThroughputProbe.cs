@@ -3,6 +3,7 @@ using Anneal.Core.Model;
 using Anneal.Search.Construction;
 using Anneal.Search.Moves;
 using Anneal.Search.Neighbourhoods;
+using Anneal.Search.Randomness;
 
 namespace Anneal.Search.Diagnostics;
 
@@ -13,7 +14,7 @@ public static class ThroughputProbe
     {
         var candidates = new CandidateLists(instance, 30);
         var state = InsertionSolver.Build(instance, candidates);
-        var sampler = new MoveSampler(state, candidates, new Random(seed));
+        var sampler = new MoveSampler(state, candidates, new SearchRandom(seed));
         var move = default(MoveDraft);
         double sink = 0;
         long evaluations = 0;

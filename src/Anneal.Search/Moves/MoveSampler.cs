@@ -1,4 +1,5 @@
 using Anneal.Search.Neighbourhoods;
+using Anneal.Search.Randomness;
 using Anneal.Search.Representation;
 
 namespace Anneal.Search.Moves;
@@ -11,10 +12,13 @@ public sealed class MoveSampler
 {
     private readonly SearchState _state;
     private readonly CandidateLists _candidates;
-    private readonly Random _rng;
+    private readonly SearchRandom _rng;
     private readonly bool _anyDroppable;
 
-    public MoveSampler(SearchState state, CandidateLists candidates, Random rng)
+    /// <summary>One draw in this many picks an unserved stop when there are any.</summary>
+    private const int UnservedOdds = 8;
+
+    public MoveSampler(SearchState state, CandidateLists candidates, SearchRandom rng)
     {
         _state = state;
         _candidates = candidates;
@@ -34,7 +38,8 @@ public sealed class MoveSampler
             return false;
         }
 
-        int u = _rng.Next(n);
+        // Unserved stops are few; drawing them more often than their share lets an emptied route's stops find homes.
+        int u = s.UnservedCount > 0 && _rng.Next(UnservedOdds) == 0 ? s.UnservedAt(_rng.Next(s.UnservedCount)) : _rng.Next(n);
         int v = _candidates.At(u, _rng.Next(_candidates.K));
         if (s.RouteOf(u) < 0)
         {

@@ -328,18 +328,12 @@ public sealed class SearchState
         bool feasibleA = true, feasibleB = true;
         if (move.RouteCount > 0)
         {
-            double p = MeasureDraft(ref move.A, out var m);
-            effect.Penalized += p - _penalized[move.A.Route];
-            effect.Objective += CostModel.RouteObjective(Instance, move.A.Route, m) - _objective[move.A.Route];
-            feasibleA = CostModel.RouteFeasible(Instance, m);
+            feasibleA = AddRouteEffect(ref move.A, ref effect);
         }
 
         if (move.RouteCount > 1)
         {
-            double p = MeasureDraft(ref move.B, out var m);
-            effect.Penalized += p - _penalized[move.B.Route];
-            effect.Objective += CostModel.RouteObjective(Instance, move.B.Route, m) - _objective[move.B.Route];
-            feasibleB = CostModel.RouteFeasible(Instance, m);
+            feasibleB = AddRouteEffect(ref move.B, ref effect);
         }
 
         if (move.Dropped >= 0)
@@ -356,6 +350,16 @@ public sealed class SearchState
 
         effect.FeasibleAfter = FeasibleAfter(ref move, feasibleA, feasibleB);
         return effect;
+    }
+
+    /// <summary>Adds one new route's cost change to the effect; returns whether that route breaks no hard rule.</summary>
+    private bool AddRouteEffect(ref RouteDraft draft, ref MoveEffect effect)
+    {
+        var m = FastPath ? MeasureBySegments(ref draft) : MeasureByScheduler(ref draft);
+        double objective = CostModel.RouteObjective(Instance, draft.Route, m);
+        effect.Objective += objective - _objective[draft.Route];
+        effect.Penalized += objective + CostModel.RouteViolation(Instance, m, _weights) - _penalized[draft.Route];
+        return CostModel.RouteFeasible(Instance, m);
     }
 
     public void Load(Plan plan)

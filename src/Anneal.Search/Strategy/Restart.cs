@@ -1,3 +1,5 @@
+using Anneal.Search.Construction;
+using Anneal.Search.Neighbourhoods;
 using Anneal.Search.Representation;
 
 namespace Anneal.Search.Strategy;
@@ -12,9 +14,89 @@ public static class Restart
         if (eliminateRoute && keeper.HasFeasible)
         {
             keeper.BeforeReset(state);
-            RouteElimination.EmptySmallest(state, rng);
+            RouteElimination.EmptyAShortRoute(state, rng);
         }
 
         state.SetWeights(adapter.Weights);
+    }
+
+    /// <summary>
+    /// Ends the fleet phase: the running attempt is repaired, and the search goes back to the best plan to work on
+    /// distance alone. True when the repair gave a new best.
+    /// </summary>
+    public static bool Settle(SearchState state, BestKeeper keeper, PenaltyAdapter adapter, CandidateLists candidates, FleetPhase phase, double progress, Random rng)
+    {
+        phase.BeginDistance(progress);
+        bool improved = Repair(state, keeper, adapter, candidates);
+        FromBest(state, keeper, adapter, false, rng);
+        return improved;
+    }
+
+    /// <summary>
+    /// What to do when the search stalls: in the distance phase go back to the best; in the fleet phase repair the
+    /// attempt and start the next one. True when the repair gave a new best.
+    /// </summary>
+    public static bool AfterStall(SearchState state, BestKeeper keeper, PenaltyAdapter adapter, CandidateLists candidates, FleetPhase phase, double progress, Random rng)
+    {
+        if (!phase.Eliminating)
+        {
+            FromBest(state, keeper, adapter, false, rng);
+            return false;
+        }
+
+        bool improved = Repair(state, keeper, adapter, candidates);
+        if (improved)
+        {
+            phase.NewBest(state, progress);
+        }
+
+        NextAttempt(state, keeper, adapter, phase.FewestRoutes, rng);
+        return improved;
+    }
+
+    /// <summary>
+    /// The next route-elimination attempt, after <see cref="Repair"/>: from the repaired plan when it is feasible on
+    /// no more routes than the best (its routes kept improving while the attempt ran), else from the best; then one
+    /// route is emptied.
+    /// </summary>
+    private static void NextAttempt(SearchState state, BestKeeper keeper, PenaltyAdapter adapter, int fewestRoutes, Random rng)
+    {
+        keeper.BeforeReset(state);
+        if (!state.Feasible || state.UsedRoutes > fewestRoutes)
+        {
+            keeper.Restore(state);
+        }
+
+        if (keeper.HasFeasible)
+        {
+            keeper.BeforeReset(state);
+            RouteElimination.EmptyAShortRoute(state, rng);
+        }
+
+        state.SetWeights(adapter.Weights);
+    }
+
+    /// <summary>
+    /// Ends a stalled route-elimination attempt without throwing its work away: the stops still unserved are put
+    /// back by cheapest insertion under construction prices (opening a route if need be) and the result is offered
+    /// as a best. True when it is one.
+    /// </summary>
+    public static bool Repair(SearchState state, BestKeeper keeper, PenaltyAdapter adapter, CandidateLists candidates)
+    {
+        keeper.BeforeReset(state);
+        if (state.UnservedCount > 0)
+        {
+            var pool = new int[state.UnservedCount];
+            for (int k = 0; k < pool.Length; k++)
+            {
+                pool[k] = state.UnservedAt(k);
+            }
+
+            state.SetWeights(InitialWeights.ForConstruction(state.Instance));
+            CheapestInsertion.Run(state, candidates, pool);
+        }
+
+        state.SetWeights(adapter.Weights);
+        return keeper.Offer(state);
     }
 }

@@ -5,7 +5,7 @@ using Anneal.Search.Representation;
 namespace Anneal.Search.Strategy;
 
 /// <summary>
-/// Vehicle reduction: empty the route with the fewest stops and leave its stops unserved, so that the search must
+/// Vehicle reduction: empty a route with few stops and leave its stops unserved, so that the search must
 /// reinsert them elsewhere under penalties (the route-minimisation idea of ejection pools, e.g. Nagata &amp; Bräysy 2009).
 /// Worth it only when vehicles cost something: vehicles-then-distance, or fixed costs.
 /// </summary>
@@ -34,41 +34,35 @@ public static class RouteElimination
         return false;
     }
 
-    /// <summary>Removes the smallest non-empty route (ties broken at random); false when at most one route is in use.</summary>
-    public static bool EmptySmallest(SearchState state, Random rng)
+    /// <summary>How many of the shortest routes an elimination attempt chooses among.</summary>
+    public const int Choices = 3;
+
+    /// <summary>
+    /// Empties one of the <see cref="Choices"/> shortest routes, chosen at random: always taking the very shortest
+    /// repeats the same failed attempt after every repair. False when at most one route is in use.
+    /// </summary>
+    public static bool EmptyAShortRoute(SearchState state, Random rng)
     {
-        int smallest = -1;
-        int used = 0;
-        int ties = 0;
+        var used = new List<(int Length, int Route)>();
         for (int r = 0; r < state.RouteCount; r++)
         {
-            int len = state.Length(r);
-            if (len == 0)
+            if (state.Length(r) > 0)
             {
-                continue;
-            }
-
-            used++;
-            if (smallest < 0 || len < state.Length(smallest))
-            {
-                smallest = r;
-                ties = 1;
-            }
-            else if (len == state.Length(smallest) && rng.Next(++ties) == 0)
-            {
-                smallest = r;
+                used.Add((state.Length(r), r));
             }
         }
 
-        if (used <= 1)
+        if (used.Count <= 1)
         {
             return false;
         }
 
+        used.Sort();
+        int chosen = used[rng.Next(Math.Min(Choices, used.Count))].Route;
         var routes = new List<PlannedRoute>();
         for (int r = 0; r < state.RouteCount; r++)
         {
-            if (r != smallest && state.Length(r) > 0)
+            if (r != chosen && state.Length(r) > 0)
             {
                 routes.Add(new PlannedRoute(r, state.Route(r).ToArray()));
             }

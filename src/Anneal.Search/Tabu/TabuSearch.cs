@@ -2,6 +2,7 @@ using Anneal.Core.Model;
 using Anneal.Search.Construction;
 using Anneal.Search.Moves;
 using Anneal.Search.Neighbourhoods;
+using Anneal.Search.Randomness;
 using Anneal.Search.Representation;
 using Anneal.Search.Running;
 using Anneal.Search.Strategy;
@@ -30,7 +31,7 @@ public sealed class TabuSearch : SeededSearch
     protected override SolverResult SolveOnce(Instance instance, SolveOptions options, IProgress<TracePoint>? progress, CancellationToken cancel)
     {
         var start = SearchStart.Begin(instance, options, _settings.Neighbours, progress, cancel);
-        var run = new Run(this, start, new Random(options.Seed));
+        var run = new Run(this, start, new SearchRandom(options.Seed));
         run.Loop(options.TargetObjective);
         var budget = start.Budget;
         return new SolverResult(Name, run.Keeper.BestPlan(start.State), budget.Elapsed, start.Trace.SecondsToBest, start.Trace.Points, budget.StopReason);
@@ -43,7 +44,7 @@ public sealed class TabuSearch : SeededSearch
         private readonly Instance _instance;
         private readonly SearchState _state;
         private readonly CandidateLists _candidates;
-        private readonly Random _rng;
+        private readonly SearchRandom _rng;
         private readonly Budget _budget;
         private readonly TraceRecorder _trace;
         private readonly PenaltyAdapter _adapter;
@@ -72,11 +73,11 @@ public sealed class TabuSearch : SeededSearch
         private int _window;
         private int _chosenU;
         private int _chosenV;
-        private readonly bool _reduceVehicles;
+        private readonly FleetPhase _phase;
 
         public BestKeeper Keeper { get; }
 
-        public Run(TabuSearch owner, SearchStart start, Random rng)
+        public Run(TabuSearch owner, SearchStart start, SearchRandom rng)
         {
             var state = start.State;
             var instance = state.Instance;
@@ -109,7 +110,7 @@ public sealed class TabuSearch : SeededSearch
             _tabuUntil = new int[_n * _columns];
             _frequency = new int[_n * _columns];
             _tenure = _settings.TenureFactor * Math.Log10(Math.Max(10, _n));
-            _reduceVehicles = RouteElimination.Applies(instance);
+            _phase = new FleetPhase(RouteElimination.Applies(instance), _settings.FleetShare, _settings.FleetPatience);
         }
 
         public void Loop(double? target)
@@ -139,6 +140,7 @@ public sealed class TabuSearch : SeededSearch
                 if (Keeper.Offer(_state))
                 {
                     lastImprovedAt = _budget.Progress(iteration);
+                    _phase.NewBest(_state, lastImprovedAt);
                     _trace.Improved(Point(iteration, $"tenure={_tenure:0.#}"));
                     if (target is { } t && Keeper.HasFeasible && Keeper.Objective <= t)
                     {
@@ -148,12 +150,24 @@ public sealed class TabuSearch : SeededSearch
 
                 _adapter.Update(_state);
                 double p = _budget.Progress(iteration);
-                double stagnation = _reduceVehicles ? _settings.StagnationFraction / 2 : _settings.StagnationFraction;
-                if (p - lastImprovedAt > stagnation && p < 0.9)
+                double stagnation = _phase.Eliminating ? _settings.StagnationFraction / 2 : _settings.StagnationFraction;
+                bool repaired = false;
+                if (_phase.Due(p))
                 {
-                    Restart.FromBest(_state, Keeper, _adapter, _reduceVehicles && p < 0.7, _rng);
+                    repaired = Restart.Settle(_state, Keeper, _adapter, _candidates, _phase, p, _rng);
                     Array.Clear(_tabuUntil);
                     lastImprovedAt = p;
+                }
+                else if (p - lastImprovedAt > stagnation && p < 0.9)
+                {
+                    repaired = Restart.AfterStall(_state, Keeper, _adapter, _candidates, _phase, p, _rng);
+                    Array.Clear(_tabuUntil);
+                    lastImprovedAt = p;
+                }
+
+                if (repaired)
+                {
+                    _trace.Improved(Point(iteration, "repaired"));
                 }
 
                 int it = iteration;

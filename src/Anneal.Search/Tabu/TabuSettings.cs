@@ -18,6 +18,12 @@ public sealed record TabuSettings
     /// <summary>Fraction of the budget without a new best after which the search restarts from the best plan.</summary>
     public double StagnationFraction { get; init; } = 0.15;
 
+    /// <summary>Largest share of the budget spent eliminating routes when vehicles cost (as for annealing).</summary>
+    public double FleetShare { get; init; } = 0.6;
+
+    /// <summary>Share of the budget without a plan on fewer routes after which route elimination stops early.</summary>
+    public double FleetPatience { get; init; } = 0.25;
+
     /// <summary>At most this many stops are scanned per iteration (a rotating window) so that huge instances still iterate.</summary>
     public int MaxStopsPerIteration { get; init; } = 2500;
 }
