@@ -130,6 +130,7 @@ public sealed class Instance
 
     public double Demand(int stop, int dimension) => DemandFlat[(stop * DimensionCount) + dimension];
 
+    [System.Runtime.CompilerServices.MethodImpl(System.Runtime.CompilerServices.MethodImplOptions.AggressiveInlining)]
     public double Capacity(int vehicle, int dimension) => CapacityFlat[(vehicle * DimensionCount) + dimension];
 
     public double ServiceTime(int stop) => Service[stop];

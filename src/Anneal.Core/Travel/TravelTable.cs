@@ -147,6 +147,7 @@ public sealed class TravelTable
         }
     }
 
+    [System.Runtime.CompilerServices.MethodImpl(System.Runtime.CompilerServices.MethodImplOptions.AggressiveInlining)]
     private double ComputePlanar(int from, int to)
     {
         double dx = _x[from] - _x[to];

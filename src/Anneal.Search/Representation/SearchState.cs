@@ -546,10 +546,11 @@ public sealed class SearchState
         return over;
     }
 
+    [System.Runtime.CompilerServices.MethodImpl(System.Runtime.CompilerServices.MethodImplOptions.AggressiveInlining)]
     private static void Append(ref Segment acc, in Segment next, Core.Travel.TravelTable travel)
     {
         travel.Arc(acc.Last, next.First, out double distance, out double duration);
-        acc = Segment.Concat(in acc, in next, duration, distance);
+        Segment.Extend(ref acc, in next, duration, distance);
     }
 
     /// <summary>Writes the draft's stops, in order, into <paramref name="target"/>; returns the count.</summary>

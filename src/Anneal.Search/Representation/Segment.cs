@@ -50,27 +50,27 @@ public struct Segment
         Latest = Math.Min(Far, close),
     };
 
-    /// <summary>a followed by b, with the arc between them.</summary>
+    /// <summary>
+    /// Appends b to a in place (a followed by b, with the arc between them). The evaluation loop extends one accumulator many times per move; updating it field
+    /// by field spares a copy of the whole summary at every step. Native min/max: every value here is finite.
+    /// </summary>
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
-    public static Segment Concat(in Segment a, in Segment b, double travelTime, double travelDistance)
+    public static void Extend(ref Segment a, in Segment b, double travelTime, double travelDistance)
     {
         double delta = a.Duration - a.TimeWarp + travelTime;
-        double waitGain = Math.Max(b.Earliest - delta - a.Latest, 0);
-        double warpGain = Math.Max(a.Earliest + delta - b.Latest, 0);
-        Segment s;
-        s.First = a.First;
-        s.Last = b.Last;
-        s.Count = a.Count + b.Count;
-        s.Distance = a.Distance + b.Distance + travelDistance;
-        s.Duration = a.Duration + b.Duration + travelTime + waitGain;
-        s.TimeWarp = a.TimeWarp + b.TimeWarp + warpGain;
-        s.Earliest = Math.Max(b.Earliest - delta, a.Earliest) - waitGain;
-        s.Latest = Math.Min(b.Latest - delta, a.Latest) + warpGain;
-        s.Load0 = a.Load0 + b.Load0;
-        s.Load1 = a.Load1 + b.Load1;
-        s.Load2 = a.Load2 + b.Load2;
-        s.Load3 = a.Load3 + b.Load3;
-        s.Skills = a.Skills | b.Skills;
-        return s;
+        double waitGain = double.MaxNative(b.Earliest - delta - a.Latest, 0);
+        double warpGain = double.MaxNative(a.Earliest + delta - b.Latest, 0);
+        a.Last = b.Last;
+        a.Count += b.Count;
+        a.Distance += b.Distance + travelDistance;
+        a.Duration += b.Duration + travelTime + waitGain;
+        a.TimeWarp += b.TimeWarp + warpGain;
+        a.Earliest = double.MaxNative(b.Earliest - delta, a.Earliest) - waitGain;
+        a.Latest = double.MinNative(b.Latest - delta, a.Latest) + warpGain;
+        a.Load0 += b.Load0;
+        a.Load1 += b.Load1;
+        a.Load2 += b.Load2;
+        a.Load3 += b.Load3;
+        a.Skills |= b.Skills;
     }
 }
