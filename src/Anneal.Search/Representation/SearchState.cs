@@ -24,6 +24,11 @@ public sealed class SearchState
     private readonly int[] _posOf;
     private readonly Segment[][] _prefix;
     private readonly Segment[][] _suffix;
+
+    // The same summaries with the route's own depots attached: start depot + stops 0..k, and stops k.. + end depot.
+    // A move that keeps a route's head or tail then costs one concatenation less at each end.
+    private readonly Segment[][] _head;
+    private readonly Segment[][] _tail;
     private readonly Segment[] _node;
     private readonly Segment[] _depotStart;
     private readonly Segment[] _depotEnd;
@@ -56,12 +61,16 @@ public sealed class SearchState
         _stops = new int[RouteCount][];
         _prefix = new Segment[RouteCount][];
         _suffix = new Segment[RouteCount][];
+        _head = new Segment[RouteCount][];
+        _tail = new Segment[RouteCount][];
         _length = new int[RouteCount];
         for (int r = 0; r < RouteCount; r++)
         {
             _stops[r] = new int[8];
             _prefix[r] = new Segment[8];
             _suffix[r] = new Segment[8];
+            _head[r] = new Segment[8];
+            _tail[r] = new Segment[8];
         }
 
         _routeOf = new int[n];
@@ -465,8 +474,26 @@ public sealed class SearchState
     {
         var travel = Instance.Travel;
         int vehicle = draft.Route;
-        Segment acc = _depotStart[vehicle];
-        for (int k = 0; k < draft.Count; k++)
+        int first = 0, last = draft.Count;
+        Segment acc;
+        if (draft.Count > 0 && StartsLikeHead(in draft.Pieces[0], vehicle))
+        {
+            ref Piece p = ref draft.Pieces[0];
+            acc = _head[p.Route][p.To];
+            first = 1;
+        }
+        else
+        {
+            acc = _depotStart[vehicle];
+        }
+
+        bool tail = last > first && EndsLikeTail(in draft.Pieces[last - 1], vehicle);
+        if (tail)
+        {
+            last--;
+        }
+
+        for (int k = first; k < last; k++)
         {
             ref Piece p = ref draft.Pieces[k];
             if (p.Route < 0)
@@ -503,6 +530,16 @@ public sealed class SearchState
             }
         }
 
+        if (tail)
+        {
+            ref Piece p = ref draft.Pieces[draft.Count - 1];
+            Append(ref acc, in _tail[p.Route][p.From], travel);
+        }
+        else if (acc.Count > 0)
+        {
+            Append(ref acc, in _depotEnd[vehicle], travel);
+        }
+
         var m = default(RouteMetrics);
         m.StopCount = acc.Count;
         if (acc.Count == 0)
@@ -510,7 +547,6 @@ public sealed class SearchState
             return m;
         }
 
-        Append(ref acc, in _depotEnd[vehicle], travel);
         var costs = _costs;
         m.Distance = acc.Distance;
         m.Duration = acc.Duration;
@@ -522,6 +558,23 @@ public sealed class SearchState
         m.Overload = Overload(vehicle, in acc);
         m.MissingSkills = System.Numerics.BitOperations.PopCount(acc.Skills & ~costs.Skills(vehicle));
         return m;
+    }
+
+    // A route's stored head stands in for a draft's start when it begins that route and the draft's vehicle leaves
+    // from the same depot at the same shift start; a stored tail likewise needs the same end depot.
+    private bool StartsLikeHead(in Piece p, int vehicle) =>
+        p.Route >= 0 && !p.Reversed && p.From == 0 && p.To >= 0 && p.To < _length[p.Route]
+        && (p.Route == vehicle || SameStart(p.Route, vehicle));
+
+    private bool EndsLikeTail(in Piece p, int vehicle) =>
+        p.Route >= 0 && !p.Reversed && p.To == _length[p.Route] - 1 && p.From <= p.To
+        && (p.Route == vehicle || _depotEnd[p.Route].First == _depotEnd[vehicle].First);
+
+    private bool SameStart(int a, int b)
+    {
+        ref readonly var x = ref _depotStart[a];
+        ref readonly var y = ref _depotStart[b];
+        return x.First == y.First && x.Earliest == y.Earliest && x.Latest == y.Latest;
     }
 
     private double Overload(int vehicle, in Segment s)
@@ -629,6 +682,8 @@ public sealed class SearchState
             Array.Resize(ref _stops[route], size);
             _prefix[route] = new Segment[size];
             _suffix[route] = new Segment[size];
+            _head[route] = new Segment[size];
+            _tail[route] = new Segment[size];
         }
     }
 
@@ -662,6 +717,16 @@ public sealed class SearchState
                 var head = _node[stops[k]];
                 Append(ref head, in suffix[k + 1], travel);
                 suffix[k] = head;
+            }
+
+            var heads = _head[route];
+            var tails = _tail[route];
+            for (int k = 0; k < len; k++)
+            {
+                heads[k] = _depotStart[route];
+                Append(ref heads[k], in prefix[k], travel);
+                tails[k] = suffix[k];
+                Append(ref tails[k], in _depotEnd[route], travel);
             }
         }
 
