@@ -31,6 +31,7 @@ public sealed class SearchRandom : Random
         return z ^ (z >> 31);
     }
 
+    [System.Runtime.CompilerServices.MethodImpl(System.Runtime.CompilerServices.MethodImplOptions.AggressiveInlining)]
     private ulong NextBits()
     {
         ulong result = unchecked(ulong.RotateLeft(_s1 * 5, 7) * 9);
@@ -45,6 +46,7 @@ public sealed class SearchRandom : Random
     }
 
     /// <summary>Uniform in [0, maxValue); the slight bias of multiply-shift (below 2^-32 relative) is immaterial to a search.</summary>
+    [System.Runtime.CompilerServices.MethodImpl(System.Runtime.CompilerServices.MethodImplOptions.AggressiveInlining)]
     public override int Next(int maxValue) => maxValue <= 0 ? 0 : (int)(((NextBits() >> 32) * (ulong)maxValue) >> 32);
 
     public override int Next(int minValue, int maxValue) => minValue + Next(maxValue - minValue);
