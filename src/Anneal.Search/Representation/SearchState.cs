@@ -299,7 +299,7 @@ public sealed class SearchState
 
     private bool AddRouteParts(ref RouteDraft draft, ref MoveParts parts)
     {
-        var m = FastPath ? MeasureBySegments(ref draft) : MeasureByScheduler(ref draft);
+        var m = Measure(ref draft);
         ref readonly var old = ref _metrics[draft.Route];
         var rules = Instance.Rules;
         parts.Objective += CostModel.RouteObjective(Instance, draft.Route, m) - _objective[draft.Route];
@@ -364,7 +364,7 @@ public sealed class SearchState
     /// <summary>Adds one new route's cost change to the effect; returns whether that route breaks no hard rule.</summary>
     private bool AddRouteEffect(ref RouteDraft draft, ref MoveEffect effect)
     {
-        var m = FastPath ? MeasureBySegments(ref draft) : MeasureByScheduler(ref draft);
+        var m = Measure(ref draft);
         double objective = CostModel.RouteObjective(Instance, draft.Route, m);
         effect.Objective += objective - _objective[draft.Route];
         effect.Penalized += objective + CostModel.RouteViolation(Instance, m, _weights) - _penalized[draft.Route];
@@ -431,38 +431,16 @@ public sealed class SearchState
     }
 
     /// <summary>Penalized cost change if the move were applied (cost of new routes − old routes ± unserved).</summary>
-    public double Delta(ref MoveDraft move)
-    {
-        double delta = 0;
-        if (move.RouteCount > 0)
-        {
-            delta += MeasureDraft(ref move.A, out _) - _penalized[move.A.Route];
-        }
-
-        if (move.RouteCount > 1)
-        {
-            delta += MeasureDraft(ref move.B, out _) - _penalized[move.B.Route];
-        }
-
-        if (move.Dropped >= 0)
-        {
-            delta += UnservedCost(move.Dropped);
-        }
-
-        if (move.Inserted >= 0)
-        {
-            delta -= UnservedCost(move.Inserted);
-        }
-
-        return delta;
-    }
+    public double Delta(ref MoveDraft move) => Evaluate(ref move).Penalized;
 
     /// <summary>Penalized cost of the route a draft describes, and its measures.</summary>
     public double MeasureDraft(ref RouteDraft draft, out RouteMetrics metrics)
     {
-        metrics = FastPath ? MeasureBySegments(ref draft) : MeasureByScheduler(ref draft);
+        metrics = Measure(ref draft);
         return CostModel.RoutePenalized(Instance, draft.Route, metrics, _weights);
     }
+
+    private RouteMetrics Measure(ref RouteDraft draft) => FastPath ? MeasureBySegments(ref draft) : MeasureByScheduler(ref draft);
 
     private RouteMetrics MeasureByScheduler(ref RouteDraft draft)
     {

@@ -51,8 +51,8 @@ public struct Segment
     };
 
     /// <summary>
-    /// Appends b to a in place (a followed by b, with the arc between them). The evaluation loop extends one accumulator many times per move; updating it field
-    /// by field spares a copy of the whole summary at every step. Native min/max: every value here is finite.
+    /// Appends b to a in place: a followed by b, with the arc between them. Native min/max are safe because every
+    /// value here is finite (windows are clamped to <see cref="Far"/>).
     /// </summary>
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     public static void Extend(ref Segment a, in Segment b, double travelTime, double travelDistance)
