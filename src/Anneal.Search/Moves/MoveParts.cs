@@ -15,6 +15,12 @@ public struct MoveParts
     /// <summary>Change in the number of infeasible routes among the routes the move rebuilds.</summary>
     public int InfeasibleRoutes;
 
+    /// <summary>The move takes the last stops off one of its routes.</summary>
+    public bool EmptiesRoute;
+
+    /// <summary>The move puts stops on a route that has none.</summary>
+    public bool OpensRoute;
+
     /// <summary>Feasibility after the move, as computed; stale once other routes change (see SearchState.FeasibleAfter).</summary>
     public bool FeasibleAfter;
 

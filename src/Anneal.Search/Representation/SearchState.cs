@@ -129,6 +129,12 @@ public sealed class SearchState
     /// <summary>No hard rule broken: every route feasible and no mandatory stop unserved.</summary>
     public bool Feasible => _infeasibleRoutes == 0 && _mandatoryUnserved == 0;
 
+    /// <summary>Routes that break a hard rule now (unserved stops aside).</summary>
+    public int InfeasibleRoutes => _infeasibleRoutes;
+
+    /// <summary>Objective of one route as it is now.</summary>
+    public double RouteObjective(int route) => _objective[route];
+
     /// <summary>The reported objective (no search penalties), summed afresh.</summary>
     public double Objective()
     {
@@ -252,6 +258,16 @@ public sealed class SearchState
         return infeasible == 0 && mandatory == 0;
     }
 
+    /// <summary>Does the move put stops on a route that has none now?</summary>
+    public bool OpensRoute(ref MoveDraft move) =>
+        (move.RouteCount > 0 && move.A.Count > 0 && _length[move.A.Route] == 0)
+        || (move.RouteCount > 1 && move.B.Count > 0 && _length[move.B.Route] == 0);
+
+    /// <summary>Does the move take the last stops off a route?</summary>
+    public bool EmptiesRoute(ref MoveDraft move) =>
+        (move.RouteCount > 0 && move.A.Count == 0 && _length[move.A.Route] > 0)
+        || (move.RouteCount > 1 && move.B.Count == 0 && _length[move.B.Route] > 0);
+
     /// <summary>Feasibility after a move whose parts were computed earlier, against the state as it is now.</summary>
     public bool FeasibleAfter(in MoveParts parts) =>
         _infeasibleRoutes + parts.InfeasibleRoutes == 0 && _mandatoryUnserved + parts.Violation.Unserved == 0;
@@ -284,6 +300,8 @@ public sealed class SearchState
         }
 
         parts.FeasibleAfter = FeasibleAfter(ref move, feasibleA, feasibleB);
+        parts.EmptiesRoute = EmptiesRoute(ref move);
+        parts.OpensRoute = OpensRoute(ref move);
         if (move.RouteCount > 0)
         {
             parts.InfeasibleRoutes += (feasibleA ? 0 : 1) - (_feasible[move.A.Route] ? 0 : 1);

@@ -48,8 +48,14 @@ public sealed class IncrementalEvaluationTests
                 var effect = state.Evaluate(ref move);
                 var parts = state.EvaluateParts(ref move);
                 bool partsFeasible = state.FeasibleAfter(parts);
+                bool opens = state.OpensRoute(ref move);
+                bool empties = state.EmptiesRoute(ref move);
+                int usedBefore = state.ToPlan().VehiclesUsed;
                 state.Apply(ref move);
                 var plan = state.ToPlan();
+                Assert.Equal(empties, parts.EmptiesRoute);
+                Assert.Equal(opens, parts.OpensRoute);
+                Assert.Equal((opens ? 1 : 0) - (empties ? 1 : 0), plan.VehiclesUsed - usedBefore);
                 var truth = PlanEvaluator.Evaluate(instance, plan);
                 double after = PlanEvaluator.Penalized(instance, plan, weights);
                 double tolerance = 1e-6 * Math.Max(1, Math.Abs(before));
