@@ -15,8 +15,11 @@ public sealed class FleetPhase
     private double _lastFewerAt;
     private int _fewestRoutes = int.MaxValue;
 
+    private readonly bool _reduceVehicles;
+
     public FleetPhase(bool reduceVehicles, double share, double patience)
     {
+        _reduceVehicles = reduceVehicles;
         Eliminating = reduceVehicles;
         _deadline = reduceVehicles ? share : 1;
         End = _deadline;
@@ -28,6 +31,21 @@ public sealed class FleetPhase
 
     /// <summary>True while the search still tries to use fewer routes.</summary>
     public bool Eliminating { get; private set; }
+
+    /// <summary>
+    /// True in the distance phase of a run where vehicles cost: the fleet of the best plan is then held. Violations
+    /// are priced above a vehicle by then, so opening a route to cure one would let the current plan drift onto more
+    /// routes than the best, and emptying a route while breaking a rule gains a vehicle that outweighs any price and
+    /// would strand it on too few (both measured on the 1,000-stop Gehring-Homberger files).
+    /// </summary>
+    public bool HoldsFleet => _reduceVehicles && !Eliminating;
+
+    /// <summary>
+    /// Does holding the fleet refuse this move? A route may be opened only by a move that lowers the objective and
+    /// breaks no rule; one may be emptied only by a move that breaks no rule.
+    /// </summary>
+    public static bool Refuses(bool opensRoute, bool emptiesRoute, bool feasibleAfter, double objectiveChange) =>
+        opensRoute ? !(feasibleAfter && objectiveChange < 0) : emptiesRoute && !feasibleAfter;
 
     /// <summary>Budget progress at which the current phase began.</summary>
     public double Start { get; private set; }

@@ -21,12 +21,11 @@ public static class Restart
     }
 
     /// <summary>
-    /// Ends the fleet phase: the running attempt is repaired, and the search goes back to the best plan to work on
-    /// distance alone. True when the repair gave a new best.
+    /// Closes the fleet phase's last attempt: the running attempt is repaired, and the search goes back to the best
+    /// plan. True when the repair gave a new best. The caller then begins the distance phase.
     /// </summary>
-    public static bool Settle(SearchState state, BestKeeper keeper, PenaltyAdapter adapter, CandidateLists candidates, FleetPhase phase, double progress, Random rng)
+    public static bool Settle(SearchState state, BestKeeper keeper, PenaltyAdapter adapter, CandidateLists candidates, Random rng)
     {
-        phase.BeginDistance(progress);
         bool improved = Repair(state, keeper, adapter, candidates);
         FromBest(state, keeper, adapter, false, rng);
         return improved;

@@ -74,6 +74,7 @@ public sealed class TabuSearch : SeededSearch
         private int _chosenU;
         private int _chosenV;
         private readonly FleetPhase _phase;
+        private readonly SearchStart _start;
 
         public BestKeeper Keeper { get; }
 
@@ -88,6 +89,7 @@ public sealed class TabuSearch : SeededSearch
             _rng = rng;
             _budget = start.Budget;
             _trace = start.Trace;
+            _start = start;
             _n = state.StopCount;
             _k = _candidates.K;
             _columns = state.RouteCount + 1;
@@ -117,8 +119,9 @@ public sealed class TabuSearch : SeededSearch
         {
             _trace.Improved(Point(0, "construction"));
             var move = default(MoveDraft);
-            int iteration = 0;
-            double lastImprovedAt = 0;
+            FleetSqueeze.Opening(_start, Keeper, _phase, _rng, _settings.SqueezeShare, _settings.SqueezePatience, WorkPerIteration, out long squeezed);
+            int iteration = (int)squeezed;
+            double lastImprovedAt = _budget.Progress(iteration);
             while (!_budget.Exhausted(iteration) && _n > 0)
             {
                 iteration++;
@@ -154,7 +157,9 @@ public sealed class TabuSearch : SeededSearch
                 bool repaired = false;
                 if (_phase.Due(p))
                 {
-                    repaired = Restart.Settle(_state, Keeper, _adapter, _candidates, _phase, p, _rng);
+                    repaired = Restart.Settle(_state, Keeper, _adapter, _candidates, _rng);
+                    iteration = (int)FleetSqueeze.Run(_start, Keeper, _phase, _rng, iteration, _settings.SqueezeShare / 4, _settings.SqueezePatience, WorkPerIteration);
+                    _phase.BeginDistance(p = _budget.Progress(iteration));
                     Array.Clear(_tabuUntil);
                     lastImprovedAt = p;
                 }
@@ -177,6 +182,9 @@ public sealed class TabuSearch : SeededSearch
             _trace.Finish(Point(iteration, $"tenure={_tenure:0.#}"));
         }
 
+        // Route evaluations the ejection pool counts as one tabu iteration: about what a neighbourhood scan costs.
+        private long WorkPerIteration => Math.Max(1, (long)Math.Min(_n, _settings.MaxStopsPerIteration) * _k);
+
         private TracePoint Point(long iteration, string note) =>
             new(_budget.Elapsed, iteration, Keeper.Objective, _state.CurrentObjective, Keeper.HasFeasible, note);
 
@@ -186,6 +194,7 @@ public sealed class TabuSearch : SeededSearch
             double current = _state.CurrentObjective;
             double bestObjective = Keeper.HasFeasible ? Keeper.Objective : double.PositiveInfinity;
             double diversification = DiversificationScale(iteration);
+            bool holdFleet = _phase.HoldsFleet && Keeper.HasFeasible;
             double bestScore = double.PositiveInfinity;
             int bestU = -1, bestJ = -1, bestKind = -1;
             bestParts = default;
@@ -210,8 +219,14 @@ public sealed class TabuSearch : SeededSearch
                         }
 
                         ref readonly var parts = ref _parts[index];
+                        bool feasibleAfter = _state.FeasibleAfter(parts);
+                        if (holdFleet && FleetPhase.Refuses(parts.OpensRoute, parts.EmptiesRoute, feasibleAfter, parts.Objective))
+                        {
+                            continue;
+                        }
+
                         double pen = parts.Penalized(w);
-                        bool aspires = _state.FeasibleAfter(parts) && current + parts.Objective < bestObjective - 1e-9;
+                        bool aspires = feasibleAfter && current + parts.Objective < bestObjective - 1e-9;
                         if (!aspires && IsTabu(u, v, ru, _state.RouteOf(v), kind, iteration))
                         {
                             continue;
@@ -244,8 +259,14 @@ public sealed class TabuSearch : SeededSearch
                     }
 
                     ref readonly var parts = ref _soloParts[index];
+                    bool feasibleAfter = _state.FeasibleAfter(parts);
+                    if (holdFleet && FleetPhase.Refuses(parts.OpensRoute, parts.EmptiesRoute, feasibleAfter, parts.Objective))
+                    {
+                        continue;
+                    }
+
                     double pen = parts.Penalized(w);
-                    bool aspires = _state.FeasibleAfter(parts) && current + parts.Objective < bestObjective - 1e-9;
+                    bool aspires = feasibleAfter && current + parts.Objective < bestObjective - 1e-9;
                     int to = ru < 0 || kind == 0 ? _soloTarget[u] : _columns - 1;
                     if (!aspires && _tabuUntil[(u * _columns) + to] > iteration)
                     {

@@ -18,6 +18,15 @@ public sealed record TabuSettings
     /// <summary>Fraction of the budget without a new best after which the search restarts from the best plan.</summary>
     public double StagnationFraction { get; init; } = 0.15;
 
+    /// <summary>
+    /// Share of the budget the ejection pool may spend removing routes from the constructed plan when vehicles cost
+    /// (a quarter of it at the close of the fleet phase instead, when the constructed plan broke a hard rule).
+    /// </summary>
+    public double SqueezeShare { get; init; } = 0.4;
+
+    /// <summary>Share of the budget the ejection pool may spend on one route in vain before it gives up.</summary>
+    public double SqueezePatience { get; init; } = 0.05;
+
     /// <summary>Largest share of the budget spent eliminating routes when vehicles cost (as for annealing).</summary>
     public double FleetShare { get; init; } = 0.6;
 

@@ -33,6 +33,28 @@ public class FleetPhaseTests
     }
 
     [Fact]
+    public void TheFleetIsHeldOnlyInTheDistancePhaseOfARunWhereVehiclesCost()
+    {
+        Assert.False(new FleetPhase(reduceVehicles: false, share: 0.5, patience: 0.2).HoldsFleet);
+        var phase = new FleetPhase(reduceVehicles: true, share: 0.5, patience: 0.2);
+        Assert.False(phase.HoldsFleet);
+        phase.BeginDistance(0.3);
+        Assert.True(phase.HoldsFleet);
+    }
+
+    [Theory]
+    [InlineData(false, false, false, 5.0, false)]
+    [InlineData(true, false, true, -1.0, false)]
+    [InlineData(true, false, true, 1.0, true)]
+    [InlineData(true, false, false, -1.0, true)]
+    [InlineData(false, true, true, 1.0, false)]
+    [InlineData(false, true, false, -1.0, true)]
+    public void HoldingTheFleetRefusesOnlyRouteChangesThatBreakRulesOrCostMore(bool opens, bool empties, bool feasibleAfter, double change, bool refused)
+    {
+        Assert.Equal(refused, FleetPhase.Refuses(opens, empties, feasibleAfter, change));
+    }
+
+    [Fact]
     public void EachPhaseCoolsOverItsOwnSpan()
     {
         var phase = new FleetPhase(reduceVehicles: true, share: 0.5, patience: 0.2);
