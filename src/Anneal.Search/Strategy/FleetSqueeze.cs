@@ -4,11 +4,11 @@ using Anneal.Search.Running;
 namespace Anneal.Search.Strategy;
 
 /// <summary>
-/// The close of the fleet phase: once the metaheuristic has stopped finding plans on fewer routes, the ejection pool
-/// removes routes one at a time from the best feasible plan. Its plans are poor in distance, so it runs only after
-/// the metaheuristic has shaped the routes, to take the last one or two the penalties could not. Each removal
-/// persists until it succeeds, the share is spent, or <c>patience</c> of the budget has gone without one. Work is
-/// counted in iterations, so an iteration-bound run stays reproducible.
+/// Runs the ejection pool against a share of the budget: routes are removed one at a time from the best feasible
+/// plan, each removal persisting until it succeeds, the share is spent, or <c>patience</c> of the budget has gone
+/// without one. A run where vehicles cost opens with it (<see cref="Opening"/>); when the constructed plan broke a
+/// hard rule it runs instead at the close of the fleet phase. Work is counted in iterations, so an iteration-bound
+/// run stays reproducible.
 /// </summary>
 public static class FleetSqueeze
 {
