@@ -458,6 +458,20 @@ public sealed class SearchState
         return CostModel.RoutePenalized(Instance, draft.Route, metrics, _weights);
     }
 
+    /// <summary>Objective change of the route a draft describes, when that route keeps to the hard rules.</summary>
+    public bool FeasibleChange(ref RouteDraft draft, out double objectiveChange)
+    {
+        var m = Measure(ref draft);
+        if (!CostModel.RouteFeasible(Instance, m))
+        {
+            objectiveChange = 0;
+            return false;
+        }
+
+        objectiveChange = CostModel.RouteObjective(Instance, draft.Route, m) - _objective[draft.Route];
+        return true;
+    }
+
     private RouteMetrics Measure(ref RouteDraft draft) => FastPath ? MeasureBySegments(ref draft) : MeasureByScheduler(ref draft);
 
     private RouteMetrics MeasureByScheduler(ref RouteDraft draft)
@@ -660,6 +674,48 @@ public sealed class SearchState
         {
             Store(move.B.Route, _scratchB, countB);
         }
+    }
+
+    /// <summary>
+    /// Gives a route exactly these stops, in order. Stops it loses go unserved; every stop given must be unserved
+    /// or on this route already. For compound changes (ruin and recreate, and undoing one).
+    /// </summary>
+    public void SetRoute(int route, ReadOnlySpan<int> stops)
+    {
+        const int Leaving = -2;
+        var old = _stops[route];
+        int len = _length[route];
+        for (int k = 0; k < len; k++)
+        {
+            _routeOf[old[k]] = Leaving;
+        }
+
+        for (int k = 0; k < stops.Length; k++)
+        {
+            int stop = stops[k];
+            if (_routeOf[stop] == -1)
+            {
+                RemoveUnserved(stop);
+            }
+            else if (_routeOf[stop] != Leaving)
+            {
+                throw new InvalidOperationException($"Stop {stop} is on route {_routeOf[stop]}, not {route}.");
+            }
+
+            _routeOf[stop] = route;
+        }
+
+        for (int k = 0; k < len; k++)
+        {
+            if (_routeOf[old[k]] == Leaving)
+            {
+                _routeOf[old[k]] = -1;
+                AddUnserved(old[k]);
+            }
+        }
+
+        stops.CopyTo(_scratch);
+        Store(route, _scratch, stops.Length);
     }
 
     private void Store(int route, int[] source, int count)

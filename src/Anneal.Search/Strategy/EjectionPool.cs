@@ -1,4 +1,3 @@
-using Anneal.Core.Evaluation;
 using Anneal.Search.Moves;
 using Anneal.Search.Neighbourhoods;
 using Anneal.Search.Randomness;
@@ -117,7 +116,7 @@ public sealed class EjectionPool
                 bool after = side == 1;
                 MoveBuilder.Insert(s, ref _move, stop, w, after);
                 work++;
-                if (FeasibleCost(ref _move.A, out double cost) && cost < best)
+                if (_state.FeasibleChange(ref _move.A, out double cost) && cost < best)
                 {
                     best = cost;
                     bestAnchor = w;
@@ -169,7 +168,7 @@ public sealed class EjectionPool
 
                     work++;
                     Build(r, gap, stop, a, -1);
-                    if (FeasibleCost(ref _draft, out double single) && (pa < bestPressure || single < bestCost))
+                    if (_state.FeasibleChange(ref _draft, out double single) && (pa < bestPressure || single < bestCost))
                     {
                         (bestPressure, bestCost, bestRoute, bestGap, bestA, bestB) = (pa, single, r, gap, a, -1);
                     }
@@ -184,7 +183,7 @@ public sealed class EjectionPool
 
                         work++;
                         Build(r, gap, stop, a, b);
-                        if (FeasibleCost(ref _draft, out double cost) && (pab < bestPressure || cost < bestCost))
+                        if (_state.FeasibleChange(ref _draft, out double cost) && (pab < bestPressure || cost < bestCost))
                         {
                             (bestPressure, bestCost, bestRoute, bestGap, bestA, bestB) = (pab, cost, r, gap, a, b);
                         }
@@ -255,21 +254,6 @@ public sealed class EjectionPool
         }
 
         _draft.Add(Piece.Range(r, from, len - 1));
-    }
-
-    /// <summary>Objective change of the drafted route if it keeps to the hard rules.</summary>
-    private bool FeasibleCost(ref RouteDraft draft, out double cost)
-    {
-        _state.MeasureDraft(ref draft, out var metrics);
-        var instance = _state.Instance;
-        if (!CostModel.RouteFeasible(instance, metrics))
-        {
-            cost = 0;
-            return false;
-        }
-
-        cost = CostModel.RouteObjective(instance, draft.Route, metrics) - _state.RouteObjective(draft.Route);
-        return true;
     }
 
     /// <summary>Random moves between routes, each kept only if every route still keeps to the hard rules.</summary>

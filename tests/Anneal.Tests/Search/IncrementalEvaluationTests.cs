@@ -51,6 +51,8 @@ public sealed class IncrementalEvaluationTests
                 bool opens = state.OpensRoute(ref move);
                 bool empties = state.EmptiesRoute(ref move);
                 int usedBefore = state.ToPlan().VehiclesUsed;
+                double routeBefore = RouteObjective(PlanEvaluator.Evaluate(instance, state.ToPlan()), move.A.Route);
+                bool routeKeepsRules = state.FeasibleChange(ref move.A, out double routeChange);
                 state.Apply(ref move);
                 var plan = state.ToPlan();
                 Assert.Equal(empties, parts.EmptiesRoute);
@@ -59,6 +61,14 @@ public sealed class IncrementalEvaluationTests
                 var truth = PlanEvaluator.Evaluate(instance, plan);
                 double after = PlanEvaluator.Penalized(instance, plan, weights);
                 double tolerance = 1e-6 * Math.Max(1, Math.Abs(before));
+                var routeTruth = truth.Routes.FirstOrDefault(r => r.Vehicle == move.A.Route);
+                Assert.Equal(routeTruth?.Feasible ?? true, routeKeepsRules);
+                if (routeKeepsRules)
+                {
+                    Assert.True(Math.Abs(RouteObjective(truth, move.A.Route) - routeBefore - routeChange) <= tolerance,
+                        $"seed {seed} step {step} {move.Kind}: route change {routeChange}, exact {RouteObjective(truth, move.A.Route) - routeBefore}");
+                }
+
                 Assert.True(Math.Abs(after - before - delta) <= tolerance,
                     $"seed {seed} step {step} {move.Kind}: incremental delta {delta}, exact {after - before}");
                 Assert.True(Math.Abs(effect.Penalized - delta) <= tolerance, "Evaluate and Delta disagree");
@@ -114,6 +124,9 @@ public sealed class IncrementalEvaluationTests
             }
         }
     }
+
+    private static double RouteObjective(PlanEvaluation evaluation, int vehicle) =>
+        evaluation.Routes.FirstOrDefault(r => r.Vehicle == vehicle)?.Objective ?? 0;
 
     internal static Plan RandomPlan(Random rng, Instance instance)
     {
