@@ -39,4 +39,13 @@ public sealed record AnnealingSettings
 
     /// <summary>Temperature multiplier added at a reheat; decays geometrically.</summary>
     public double ReheatBoost { get; init; } = 4;
+
+    /// <summary>Plain moves between two string-ruin attempts (<see cref="Strategy.StringRuin"/>) while the fleet is held; 0 turns them off.</summary>
+    public int RuinEvery { get; init; } = 100;
+
+    /// <summary>
+    /// End temperature of the distance phase on a held fleet, as a fraction of its start: the string ruins keep
+    /// finding shorter plans at temperatures where the plain moves alone are frozen (measured on rc1_10_1).
+    /// </summary>
+    public double HeldEndRatio { get; init; } = 0.1;
 }

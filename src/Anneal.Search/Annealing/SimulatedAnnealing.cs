@@ -13,7 +13,8 @@ namespace Anneal.Search.Annealing;
 /// Simulated annealing (Kirkpatrick, Gelatt &amp; Vecchi 1983; for routing Osman 1993, Chiang &amp; Russell 1996)
 /// over the granular neighbourhoods, seeded by cheapest insertion. The start temperature is calibrated from
 /// sampled move deltas; cooling is geometric in the fraction of the budget used, so a 10 s and a 10 min run both
-/// finish cold; on stagnation the search returns to the best plan and reheats; hard-rule prices adapt.
+/// finish cold; on stagnation the search returns to the best plan and reheats; hard-rule prices adapt. With the
+/// fleet held, string ruins (<see cref="StringRuin"/>) join the plain moves and the search keeps to the hard rules.
 /// </summary>
 public sealed class SimulatedAnnealing : SeededSearch
 {
@@ -51,6 +52,8 @@ public sealed class SimulatedAnnealing : SeededSearch
         }
 
         bool holdFleet = false;
+        var ruin = new StringRuin(state, candidates, rng);
+        int sinceRuin = 0;
         var move = default(MoveDraft);
         while (!budget.Exhausted(iteration))
         {
@@ -77,7 +80,8 @@ public sealed class SimulatedAnnealing : SeededSearch
                 holdFleet = phase.HoldsFleet && keeper.HasFeasible;
                 double q = phase.Within(p);
                 boost *= 0.9;
-                temperature = startTemperature * Math.Pow(_settings.EndRatio, q) * (1 + boost);
+                double endRatio = holdFleet ? _settings.HeldEndRatio : _settings.EndRatio;
+                temperature = startTemperature * Math.Pow(endRatio, q) * (1 + boost);
                 if ((iteration & 4095) == 0)
                 {
                     adapter.Update(state);
@@ -100,24 +104,38 @@ public sealed class SimulatedAnnealing : SeededSearch
                 trace.Sample(budget.Elapsed, () => Point(budget, it, keeper, state, $"T={t:G4}"));
             }
 
-            if (!sampler.Next(ref move))
+            if (holdFleet && ++sinceRuin >= _settings.RuinEvery && _settings.RuinEvery > 0 && state.Feasible)
             {
-                continue;
+                // A compound move, counted as one iteration: on a held fleet the plain moves stall where whole
+                // strings of stops must change routes at once.
+                sinceRuin = 0;
+                keeper.BeforeReset(state);
+                ruin.Attempt(temperature, out _);
+            }
+            else
+            {
+                if (!sampler.Next(ref move))
+                {
+                    continue;
+                }
+
+                var effect = state.Evaluate(ref move);
+                if (effect.Penalized > 0 && rng.NextDouble() >= Math.Exp(-effect.Penalized / temperature))
+                {
+                    continue;
+                }
+
+                // On a held fleet the search stays among plans that keep to the hard rules, where the ruin works:
+                // with priced violations the current plan sat infeasible for most of the phase and the ruin idled.
+                if (holdFleet && (!effect.FeasibleAfter || FleetPhase.Refuses(state.OpensRoute(ref move), state.EmptiesRoute(ref move), effect.FeasibleAfter, effect.Objective)))
+                {
+                    continue;
+                }
+
+                keeper.BeforeApply(state, effect);
+                state.Apply(ref move);
             }
 
-            var effect = state.Evaluate(ref move);
-            if (effect.Penalized > 0 && rng.NextDouble() >= Math.Exp(-effect.Penalized / temperature))
-            {
-                continue;
-            }
-
-            if (holdFleet && FleetPhase.Refuses(state.OpensRoute(ref move), state.EmptiesRoute(ref move), effect.FeasibleAfter, effect.Objective))
-            {
-                continue;
-            }
-
-            keeper.BeforeApply(state, effect);
-            state.Apply(ref move);
             if (keeper.Offer(state))
             {
                 lastImprovedAt = budget.Progress(iteration);
