@@ -52,6 +52,7 @@ public sealed class SimulatedAnnealing : SeededSearch
         }
 
         bool holdFleet = false;
+        bool polishing = false;
         var ruin = new StringRuin(state, candidates, rng);
         int sinceRuin = 0;
         var move = default(MoveDraft);
@@ -80,8 +81,15 @@ public sealed class SimulatedAnnealing : SeededSearch
                 holdFleet = phase.HoldsFleet && keeper.HasFeasible;
                 double q = phase.Within(p);
                 boost *= 0.9;
-                double endRatio = holdFleet ? _settings.HeldEndRatio : _settings.EndRatio;
-                temperature = startTemperature * Math.Pow(endRatio, q) * (1 + boost);
+                if (holdFleet && !polishing && q >= _settings.PolishFrom)
+                {
+                    // The warm schedule ends: polish the best plan cold for the rest of the phase.
+                    polishing = true;
+                    Restart.FromBest(state, keeper, adapter, false, rng);
+                    boost = 0;
+                }
+
+                temperature = startTemperature * Cooling(holdFleet, q) * (1 + boost);
                 if ((iteration & 4095) == 0)
                 {
                     adapter.Update(state);
@@ -151,6 +159,23 @@ public sealed class SimulatedAnnealing : SeededSearch
         trace.Finish(Point(budget, iteration, keeper, state, $"T={temperature:G4}"));
         var plan = keeper.BestPlan(state);
         return new SolverResult(Name, plan, budget.Elapsed, trace.SecondsToBest, trace.Points, budget.StopReason);
+    }
+
+    /// <summary>
+    /// Temperature as a fraction of the phase's start. On a held fleet it falls to <c>HeldEndRatio</c> by
+    /// <c>PolishFrom</c> of the phase and on to <c>EndRatio</c> after; otherwise straight to <c>EndRatio</c>.
+    /// </summary>
+    private double Cooling(bool holdFleet, double q)
+    {
+        var c = _settings;
+        if (!holdFleet)
+        {
+            return Math.Pow(c.EndRatio, q);
+        }
+
+        return q < c.PolishFrom
+            ? Math.Pow(c.HeldEndRatio, q / c.PolishFrom)
+            : c.HeldEndRatio * Math.Pow(c.EndRatio / c.HeldEndRatio, (q - c.PolishFrom) / (1 - c.PolishFrom));
     }
 
     private static TracePoint Point(Budget budget, long iteration, BestKeeper keeper, SearchState state, string note) =>
