@@ -118,7 +118,7 @@ public sealed class SimulatedAnnealing : SeededSearch
                 // strings of stops must change routes at once.
                 sinceRuin = 0;
                 keeper.BeforeReset(state);
-                ruin.Attempt(temperature, out _);
+                ruin.Attempt(temperature);
             }
             else
             {

@@ -67,14 +67,13 @@ public sealed class StringRuin
     /// <summary>
     /// Ruins and recreates the state's plan, which must keep to the hard rules. The result is kept when it does too
     /// and its objective is below the old one plus <c>-temperature·ln(u)</c> (u uniform), else the old plan is put
-    /// back. Returns whether the change was kept; <paramref name="work"/> counts the route evaluations.
+    /// back. Returns whether the change was kept.
     /// </summary>
-    public bool Attempt(double temperature, out long work)
+    public bool Attempt(double temperature)
     {
-        work = 0;
         double before = _state.CurrentObjective;
         Ruin();
-        Recreate(ref work);
+        Recreate();
         double allowance = -temperature * Math.Log(1 - _rng.NextDouble());
         bool kept = _state.Feasible && _state.CurrentObjective < before + allowance;
         if (!kept)
@@ -180,14 +179,14 @@ public sealed class StringRuin
     }
 
     /// <summary>Puts the removed stops back, in one of the paper's orders; a stop that fits nowhere stays out.</summary>
-    private void Recreate(ref long work)
+    private void Recreate()
     {
         Order();
         var instance = _state.Instance;
         for (int k = 0; k < _removedCount; k++)
         {
             int stop = _removed[k];
-            if (!BestPosition(stop, ref work, out int anchor, out bool after, out double cost))
+            if (!BestPosition(stop, out int anchor, out bool after, out double cost))
             {
                 if (!instance.MayDrop(stop))
                 {
@@ -227,12 +226,11 @@ public sealed class StringRuin
         for (int k = 0; k < _removedCount; k++)
         {
             int stop = _removed[k];
-            var window = instance.Hull(stop);
             _keys[k] = pick switch
             {
                 < 8 => -(instance.DimensionCount > 0 ? instance.Demand(stop, 0) : 0),
                 < 10 => -instance.Travel.Distance(instance.DepotLocation(0), stop),
-                _ => window.Close - window.Open,
+                _ => instance.Hull(stop).Close - instance.Hull(stop).Open,
             };
         }
 
@@ -240,7 +238,7 @@ public sealed class StringRuin
     }
 
     /// <summary>Cheapest feasible position on a route that serves a candidate neighbour, else on any route.</summary>
-    private bool BestPosition(int stop, ref long work, out int anchor, out bool after, out double cost)
+    private bool BestPosition(int stop, out int anchor, out bool after, out double cost)
     {
         anchor = -1;
         after = false;
@@ -259,7 +257,7 @@ public sealed class StringRuin
             int len = _state.Length(r);
             for (int p = 0; p < len; p++)
             {
-                Consider(stop, _state.StopAt(r, p), ref work, ref anchor, ref after, ref cost, p == len - 1 ? 2 : 1);
+                Consider(stop, _state.StopAt(r, p), ref anchor, ref after, ref cost, p == len - 1 ? 2 : 1);
             }
         }
 
@@ -273,14 +271,14 @@ public sealed class StringRuin
         {
             for (int p = 0; p < s.Length(r); p++)
             {
-                Consider(stop, s.StopAt(r, p), ref work, ref anchor, ref after, ref cost);
+                Consider(stop, s.StopAt(r, p), ref anchor, ref after, ref cost);
             }
         }
 
         return anchor >= 0;
     }
 
-    private void Consider(int stop, int neighbour, ref long work, ref int anchor, ref bool after, ref double cost, int sides = 2)
+    private void Consider(int stop, int neighbour, ref int anchor, ref bool after, ref double cost, int sides = 2)
     {
         if (_state.RouteOf(neighbour) < 0)
         {
@@ -295,7 +293,6 @@ public sealed class StringRuin
             }
 
             MoveBuilder.Insert(_state, ref _move, stop, neighbour, side == 1);
-            work++;
             if (_state.FeasibleChange(ref _move.A, out double change) && change < cost)
             {
                 (anchor, after, cost) = (neighbour, side == 1, change);

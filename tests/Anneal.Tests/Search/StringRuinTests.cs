@@ -54,7 +54,7 @@ public sealed class StringRuinTests
         double previous = start;
         for (int k = 0; k < 500; k++)
         {
-            ruin.Attempt(0, out _);
+            ruin.Attempt(0);
             Assert.True(state.CurrentObjective <= previous + 1e-9);
             previous = state.CurrentObjective;
         }
@@ -77,7 +77,7 @@ public sealed class StringRuinTests
         {
             string before = Routes(state.ToPlan());
             int usedBefore = state.UsedRoutes;
-            if (ruin.Attempt(temperature, out _))
+            if (ruin.Attempt(temperature))
             {
                 kept++;
             }
