@@ -76,7 +76,7 @@ public sealed class ExactModel
                 _objective.AddTerm(dropped, Scale.Cost(instance.UnservedPrice(i)));
                 if (servedBy[i].Count == 0)
                 {
-                    notes.Add($"stop {instance.Stops[i].Id} needs skills no vehicle has; it is left unserved");
+                    notes.Add($"stop {instance.Stops[i].Id} needs equipment no vehicle carries; it is left unserved");
                 }
             }
             else
@@ -158,7 +158,7 @@ public sealed class ExactModel
         var allowed = new bool[n];
         for (int i = 0; i < n; i++)
         {
-            allowed[i] = (inst.Stops[i].RequiredSkills & ~v.Skills) == 0;
+            allowed[i] = (inst.Stops[i].Needs & ~v.Equipment) == 0;
             var skip = Model.NewBoolVar($"c{c}.skip{i}");
             circuit.AddArc(i + 1, i + 1, skip);
             arcs[i + 1, i + 1] = skip;

@@ -207,17 +207,17 @@ public static class RoutingModelBuilder
         }
     }
 
-    /// <summary>Stops that may be left out become disjunctions with their penalty; skills restrict the vehicle variable.</summary>
+    /// <summary>Stops that may be left out become disjunctions with their penalty; needed equipment restricts the vehicle variable.</summary>
     private static void Visits(Instance instance, IntegerScale scale, RoutingModel model, RoutingIndexManager manager, List<string> notes)
     {
         for (int s = 0; s < instance.StopCount; s++)
         {
             long index = manager.NodeToIndex(s);
             var allowed = new List<long> { -1 };
-            ulong needs = instance.Stops[s].RequiredSkills;
+            ulong needs = instance.Stops[s].Needs;
             for (int v = 0; v < instance.Vehicles.Count; v++)
             {
-                if ((needs & ~instance.Vehicles[v].Skills) == 0)
+                if ((needs & ~instance.Vehicles[v].Equipment) == 0)
                 {
                     allowed.Add(v);
                 }
@@ -231,7 +231,7 @@ public static class RoutingModelBuilder
 
             if (noVehicle)
             {
-                notes.Add($"stop {instance.Stops[s].Id} needs skills no vehicle has; it is left unserved");
+                notes.Add($"stop {instance.Stops[s].Id} needs equipment no vehicle carries; it is left unserved");
             }
 
             // SetAllowedVehiclesForIndex takes an absl::Span the C# wrapper cannot build; restricting the vehicle

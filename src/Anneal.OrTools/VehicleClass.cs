@@ -36,5 +36,5 @@ public sealed record VehicleClass(Vehicle Representative, IReadOnlyList<int> Veh
         v.StartDepot, v.EndDepot, string.Join(',', v.Capacity.Select(c => c.ToString("R", CultureInfo.InvariantCulture))),
         v.ShiftStart.ToString("R", CultureInfo.InvariantCulture), v.ShiftEnd.ToString("R", CultureInfo.InvariantCulture),
         v.MaxDuration.ToString("R", CultureInfo.InvariantCulture), v.FixedCost.ToString("R", CultureInfo.InvariantCulture),
-        v.CostPerDistance.ToString("R", CultureInfo.InvariantCulture), v.CostPerHour.ToString("R", CultureInfo.InvariantCulture), v.Skills);
+        v.CostPerDistance.ToString("R", CultureInfo.InvariantCulture), v.CostPerHour.ToString("R", CultureInfo.InvariantCulture), v.Equipment);
 }

@@ -9,9 +9,9 @@ public static class InstanceDescription
     public static string Size(Instance instance)
     {
         string dims = instance.DimensionCount == 0 ? "none" : string.Join(", ", instance.DimensionNames);
-        string skills = instance.SkillNames.Count == 0 ? "none" : string.Join(", ", instance.SkillNames);
+        string equipment = instance.EquipmentNames.Count == 0 ? "none" : string.Join(", ", instance.EquipmentNames);
         return $"{instance.Name}: {Plural(instance.StopCount, "stop")}, {Plural(instance.Depots.Count, "depot")}, "
-            + $"{Plural(instance.Vehicles.Count, "vehicle")}; dimensions {dims}; skills {skills}; objective {instance.Objective.ToText()}";
+            + $"{Plural(instance.Vehicles.Count, "vehicle")}; dimensions {dims}; equipment {equipment}; objective {instance.Objective.ToText()}";
     }
 
     public static string Rules(Instance instance)
@@ -27,7 +27,7 @@ public static class InstanceDescription
         Sort("unserved", r.Unserved, "per stop");
         string hardText = hard.Count == 0 ? "none" : string.Join(", ", hard);
         string softText = soft.Count == 0 ? "none" : string.Join(", ", soft);
-        return $"rules: hard {hardText}, skills; soft {softText}";
+        return $"rules: hard {hardText}, equipment; soft {softText}";
 
         void Sort(string name, Rule rule, string per)
         {

@@ -31,7 +31,7 @@ public static class CostModel
         }
 
         var c = instance.Costs;
-        return (m.MissingSkills * w.Skill) + (m.TimeWindowViolation * c.HardTimeWindow * w.TimeWindow)
+        return (m.MissingEquipment * w.Equipment) + (m.TimeWindowViolation * c.HardTimeWindow * w.TimeWindow)
             + (m.Overload * c.HardCapacity * w.Capacity) + (m.Overtime * c.HardOvertime * w.Overtime)
             + (m.DurationExcess * c.HardDuration * w.Duration);
     }
@@ -60,7 +60,7 @@ public static class CostModel
         }
 
         var c = instance.Costs;
-        return m.MissingSkills == 0
+        return m.MissingEquipment == 0
             && m.TimeWindowViolation * c.HardTimeWindow <= tolerance
             && m.Overload * c.HardCapacity <= tolerance
             && m.Overtime * c.HardOvertime <= tolerance

@@ -13,7 +13,7 @@ public sealed class CostTable
     internal readonly double[] PerTime;
     private readonly double[] _shiftEnd;
     private readonly double[] _maxDuration;
-    private readonly ulong[] _skills;
+    private readonly ulong[] _equipment;
 
     // Soft prices (zero when the rule is hard) and hard selectors (one when the rule is hard).
     internal readonly double SoftTimeWindow, SoftCapacity, SoftOvertime, SoftDuration;
@@ -27,7 +27,7 @@ public sealed class CostTable
         PerTime = new double[count];
         _shiftEnd = new double[count];
         _maxDuration = new double[count];
-        _skills = new ulong[count];
+        _equipment = new ulong[count];
         for (int k = 0; k < count; k++)
         {
             var v = instance.Vehicles[k];
@@ -49,7 +49,7 @@ public sealed class CostTable
 
             _shiftEnd[k] = v.ShiftEnd;
             _maxDuration[k] = v.MaxDuration;
-            _skills[k] = v.Skills;
+            _equipment[k] = v.Equipment;
         }
 
         var rules = instance.Rules;
@@ -63,7 +63,7 @@ public sealed class CostTable
 
     public double MaxDuration(int vehicle) => _maxDuration[vehicle];
 
-    public ulong Skills(int vehicle) => _skills[vehicle];
+    public ulong Equipment(int vehicle) => _equipment[vehicle];
 
     private static (double Soft, double Hard) Split(Rule rule) => rule.Hard ? (0, 1) : (rule.Price, 0);
 }

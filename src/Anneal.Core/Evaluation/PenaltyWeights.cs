@@ -7,11 +7,11 @@ public struct PenaltyWeights
     public double Capacity;
     public double Overtime;
     public double Duration;
-    public double Skill;
+    public double Equipment;
     public double Unserved;
 
     public static PenaltyWeights Uniform(double w) => new()
     {
-        TimeWindow = w, Capacity = w, Overtime = w, Duration = w, Skill = w * 10, Unserved = w * 100,
+        TimeWindow = w, Capacity = w, Overtime = w, Duration = w, Equipment = w * 10, Unserved = w * 100,
     };
 }

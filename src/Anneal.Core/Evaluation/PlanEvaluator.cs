@@ -180,12 +180,12 @@ public static class PlanEvaluator
                     $"stop {stop.Id} {how} by {visits[k].Late:0.##} {unit} (vehicle {v.Id}, position {k + 1})"));
             }
 
-            ulong missing = instance.Stops[route.Stops[k]].RequiredSkills & ~v.Skills;
+            ulong missing = instance.Stops[route.Stops[k]].Needs & ~v.Equipment;
             if (missing != 0)
             {
                 var stop = instance.Stops[route.Stops[k]];
-                violations.Add(new Violation("skills", true, v.Id, stop.Id, System.Numerics.BitOperations.PopCount(missing),
-                    $"stop {stop.Id} needs {SkillList(instance, missing)}, which vehicle {v.Id} lacks"));
+                violations.Add(new Violation("equipment", true, v.Id, stop.Id, System.Numerics.BitOperations.PopCount(missing),
+                    $"stop {stop.Id} needs {EquipmentList(instance, missing)}, which vehicle {v.Id} lacks"));
             }
         }
 
@@ -208,14 +208,14 @@ public static class PlanEvaluator
         }
     }
 
-    private static string SkillList(Instance instance, ulong mask)
+    private static string EquipmentList(Instance instance, ulong mask)
     {
         var names = new List<string>();
-        for (int b = 0; b < instance.SkillNames.Count; b++)
+        for (int b = 0; b < instance.EquipmentNames.Count; b++)
         {
             if ((mask & (1UL << b)) != 0)
             {
-                names.Add(instance.SkillNames[b]);
+                names.Add(instance.EquipmentNames[b]);
             }
         }
 

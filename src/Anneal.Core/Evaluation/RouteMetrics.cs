@@ -16,5 +16,5 @@ public struct RouteMetrics
     public double Overload;
     public double Overtime;
     public double DurationExcess;
-    public int MissingSkills;
+    public int MissingEquipment;
 }

@@ -68,10 +68,10 @@ public static class RouteScheduler
         ulong needed = 0;
         for (int k = 0; k < stops.Length; k++)
         {
-            needed |= instance.Stops[stops[k]].RequiredSkills;
+            needed |= instance.Stops[stops[k]].Needs;
         }
 
-        m.MissingSkills = BitOperations.PopCount(needed & ~v.Skills);
+        m.MissingEquipment = BitOperations.PopCount(needed & ~v.Equipment);
 
         double distance = travel.Distance(home, stops[0]);
         for (int k = 1; k < stops.Length; k++)

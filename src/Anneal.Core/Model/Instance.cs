@@ -13,7 +13,7 @@ public sealed class Instance
     public IReadOnlyList<Depot> Depots { get; }
     public IReadOnlyList<Vehicle> Vehicles { get; }
     public IReadOnlyList<string> DimensionNames { get; }
-    public IReadOnlyList<string> SkillNames { get; }
+    public IReadOnlyList<string> EquipmentNames { get; }
     public RuleSet Rules { get; }
     public Objective Objective { get; }
     public TravelTable Travel { get; }
@@ -47,7 +47,7 @@ public sealed class Instance
         IReadOnlyList<Depot> depots,
         IReadOnlyList<Vehicle> vehicles,
         IReadOnlyList<string> dimensionNames,
-        IReadOnlyList<string> skillNames,
+        IReadOnlyList<string> equipmentNames,
         RuleSet rules,
         Objective objective,
         TravelTable travel,
@@ -59,7 +59,7 @@ public sealed class Instance
         Depots = depots;
         Vehicles = vehicles;
         DimensionNames = dimensionNames;
-        SkillNames = skillNames;
+        EquipmentNames = equipmentNames;
         Rules = rules;
         Objective = objective;
         Travel = travel;
@@ -154,5 +154,5 @@ public sealed class Instance
 
     /// <summary>Same instance with another objective or rule set (used by benchmarks and tests).</summary>
     public Instance With(Objective? objective = null, RuleSet? rules = null, IReadOnlyList<Vehicle>? vehicles = null) =>
-        new(Name, Stops, Depots, vehicles ?? Vehicles, DimensionNames, SkillNames, rules ?? Rules, objective ?? Objective, Travel, TimeUnit, TimeUnitsPerHour);
+        new(Name, Stops, Depots, vehicles ?? Vehicles, DimensionNames, EquipmentNames, rules ?? Rules, objective ?? Objective, Travel, TimeUnit, TimeUnitsPerHour);
 }

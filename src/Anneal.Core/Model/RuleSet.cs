@@ -10,7 +10,7 @@ public readonly record struct Rule(bool Hard, double Price)
 /// <summary>
 /// Per-rule choice of hard or soft. Prices: time windows per time unit late, capacity per unit over
 /// (summed over dimensions), shift end per time unit of overtime, maximum duration per time unit over,
-/// unserved per stop (a stop's own penalty takes precedence). Skills are always hard.
+/// unserved per stop (a stop's own penalty takes precedence). Equipment is always hard.
 /// </summary>
 public sealed record RuleSet
 {

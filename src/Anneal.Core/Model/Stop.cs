@@ -15,8 +15,8 @@ public sealed record Stop
     /// <summary>Sorted, non-overlapping windows; at least one.</summary>
     public required TimeWindow[] Windows { get; init; }
 
-    /// <summary>Bit i set means the stop needs skill i of <see cref="Instance.SkillNames"/>.</summary>
-    public ulong RequiredSkills { get; init; }
+    /// <summary>Bit i set means the stop needs item i of <see cref="Instance.EquipmentNames"/>.</summary>
+    public ulong Needs { get; init; }
 
     /// <summary>An optional stop may be left unserved at <see cref="UnservedPenalty"/>.</summary>
     public bool Optional { get; init; }

@@ -22,5 +22,6 @@ public sealed record Vehicle
     public double FixedCost { get; init; }
     public double CostPerDistance { get; init; }
     public double CostPerHour { get; init; }
-    public ulong Skills { get; init; }
+    /// <summary>Bit i set means the vehicle carries item i of <see cref="Instance.EquipmentNames"/> (a cold box, a tail lift).</summary>
+    public ulong Equipment { get; init; }
 }

@@ -4,7 +4,7 @@ namespace Anneal.Core.Screening;
 internal enum ScreenCheck
 {
     Capacity,
-    Skills,
+    Equipment,
     Window,
     ShiftEnd,
     MaxDuration,

@@ -65,8 +65,8 @@ public static class StopScreen
                 }
 
                 return false;
-            case ScreenCheck.Skills:
-                return (instance.Stops[s].RequiredSkills & ~vehicle.Skills) != 0;
+            case ScreenCheck.Equipment:
+                return (instance.Stops[s].Needs & ~vehicle.Equipment) != 0;
             case ScreenCheck.Window:
                 return rules.TimeWindows.Hard && EarliestArrival(instance, s, v) > instance.Hull(s).Close;
             case ScreenCheck.ShiftEnd:
@@ -150,7 +150,7 @@ public static class StopScreen
     private static string Label(ScreenCheck check) => check switch
     {
         ScreenCheck.Capacity => "capacity",
-        ScreenCheck.Skills => "skills",
+        ScreenCheck.Equipment => "equipment",
         ScreenCheck.Window => "the time window",
         ScreenCheck.ShiftEnd => "the shift end",
         _ => "the maximum duration",
@@ -163,8 +163,8 @@ public static class StopScreen
         {
             case ScreenCheck.Capacity:
                 return CapacityReason(instance, s);
-            case ScreenCheck.Skills:
-                return $"needs skills {SkillList(instance, instance.Stops[s].RequiredSkills)} and no single vehicle offers all of them";
+            case ScreenCheck.Equipment:
+                return $"needs {EquipmentList(instance, instance.Stops[s].Needs)} and no single vehicle offers all of them";
             case ScreenCheck.Window:
                 double arrival = Best(instance, v => EarliestArrival(instance, s, v), out _);
                 return $"the earliest any vehicle can arrive is {TimeLabel.Format(arrival, unit)}, after its last window closes at {TimeLabel.Format(instance.Hull(s).Close, unit)}";
@@ -215,14 +215,14 @@ public static class StopScreen
         return best;
     }
 
-    private static string SkillList(Instance instance, ulong bits)
+    private static string EquipmentList(Instance instance, ulong bits)
     {
         var names = new List<string>();
         for (int i = 0; i < 64; i++)
         {
             if ((bits & (1UL << i)) != 0)
             {
-                names.Add(i < instance.SkillNames.Count ? instance.SkillNames[i] : "#" + i.ToString(CultureInfo.InvariantCulture));
+                names.Add(i < instance.EquipmentNames.Count ? instance.EquipmentNames[i] : "#" + i.ToString(CultureInfo.InvariantCulture));
             }
         }
 

@@ -29,16 +29,16 @@ public static class CsvJobReader
         var matrixTable = Table(folder, MatrixTable.FileName, required: false, problems);
 
         (List<Depot> Depots, IdRegistry Ids, CoordinateSystem System)? depots = depotTable is null ? null : DepotsTable.Read(depotTable, problems);
-        var skills = new SkillIndex();
+        var equipment = new EquipmentIndex();
         List<Vehicle>? vehicles = null;
         List<string>? dimensions = null;
         if (vehicleTable is not null)
         {
-            (vehicles, dimensions) = VehiclesTable.Read(vehicleTable, depots?.Ids ?? new IdRegistry(), depots?.Depots.Count ?? 0, skills, problems);
+            (vehicles, dimensions) = VehiclesTable.Read(vehicleTable, depots?.Ids ?? new IdRegistry(), depots?.Depots.Count ?? 0, equipment, problems);
         }
 
-        var offered = vehicleTable is null ? null : new HashSet<string>(skills.Names, StringComparer.OrdinalIgnoreCase);
-        (List<Stop> Stops, IdRegistry Ids, CoordinateSystem System)? stops = stopTable is null ? null : StopsTable.Read(stopTable, dimensions, offered, skills, problems);
+        var offered = vehicleTable is null ? null : new HashSet<string>(equipment.Names, StringComparer.OrdinalIgnoreCase);
+        (List<Stop> Stops, IdRegistry Ids, CoordinateSystem System)? stops = stopTable is null ? null : StopsTable.Read(stopTable, dimensions, offered, equipment, problems);
 
         if (stops is { } s && depots is { } d && s.System != CoordinateSystem.None && d.System != CoordinateSystem.None && s.System != d.System)
         {
@@ -54,12 +54,12 @@ public static class CsvJobReader
         }
 
         problems.ThrowIfAny();
-        var instance = Build(folder, stops!.Value.Stops, stops.Value.System, depots!.Value.Depots, vehicles!, dimensions!, skills, settings, matrix);
+        var instance = Build(folder, stops!.Value.Stops, stops.Value.System, depots!.Value.Depots, vehicles!, dimensions!, equipment, settings, matrix);
         return new LoadedInput(instance, settings.Job, Format, folder);
     }
 
     private static Instance Build(string folder, List<Stop> stops, CoordinateSystem system, List<Depot> depots, List<Vehicle> vehicles,
-        List<string> dimensions, SkillIndex skills, SettingsFile settings, (double[] Distance, double[] Duration)? matrix)
+        List<string> dimensions, EquipmentIndex equipment, SettingsFile settings, (double[] Distance, double[] Duration)? matrix)
     {
         int n = stops.Count + depots.Count;
         var x = new double[n];
@@ -76,7 +76,7 @@ public static class CsvJobReader
                 : TravelTable.Planar(x, y, false, timePerDistance: 60.0 / settings.SpeedKmh);
 
         string name = Path.GetFileName(Path.TrimEndingDirectorySeparator(Path.GetFullPath(folder)));
-        return new Instance(name, stops, depots, vehicles, dimensions, skills.Names.ToArray(), settings.Rules, settings.Objective, travel,
+        return new Instance(name, stops, depots, vehicles, dimensions, equipment.Names.ToArray(), settings.Rules, settings.Objective, travel,
             timeUnit: "min", timeUnitsPerHour: 60);
     }
 

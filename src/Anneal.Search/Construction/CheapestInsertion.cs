@@ -98,7 +98,7 @@ public static class CheapestInsertion
         for (int v = 0; v < types.Length; v++)
         {
             var x = instance.Vehicles[v];
-            string key = string.Join('|', x.StartDepot, x.EndDepot, string.Join(',', x.Capacity), x.ShiftStart, x.ShiftEnd, x.MaxDuration, x.FixedCost, x.CostPerDistance, x.CostPerHour, x.Skills);
+            string key = string.Join('|', x.StartDepot, x.EndDepot, string.Join(',', x.Capacity), x.ShiftStart, x.ShiftEnd, x.MaxDuration, x.FixedCost, x.CostPerDistance, x.CostPerHour, x.Equipment);
             if (!keys.TryGetValue(key, out int t))
             {
                 t = keys.Count;
@@ -141,7 +141,7 @@ public static class CheapestInsertion
         return -1;
     }
 
-    /// <summary>Stops needing skills first, then the farthest from the depot: they are the hardest to fit late (common practice for seeding).</summary>
+    /// <summary>Stops needing equipment first, then the farthest from the depot: they are the hardest to fit late (common practice for seeding).</summary>
     public static int[] FarthestFirst(Core.Model.Instance instance)
     {
         int n = instance.StopCount;
@@ -151,8 +151,8 @@ public static class CheapestInsertion
         for (int i = 0; i < n; i++)
         {
             order[i] = i;
-            // Stops that need a skill go first, while the few vehicles that have it still have room.
-            key[i] = -instance.Travel.Distance(depot, i) - (instance.Stops[i].RequiredSkills != 0 ? 1e12 : 0);
+            // Stops that need equipment go first, while the few vehicles that have it still have room.
+            key[i] = -instance.Travel.Distance(depot, i) - (instance.Stops[i].Needs != 0 ? 1e12 : 0);
         }
 
         Array.Sort(key, order);

@@ -9,14 +9,14 @@ public struct RuleAmounts
     public double Capacity;
     public double Overtime;
     public double Duration;
-    public double Skill;
+    public double Equipment;
     public double Unserved;
 
     /// <summary>The amounts priced by the search's weights.</summary>
     public readonly double Weighted(in PenaltyWeights w) =>
         (TimeWindow * w.TimeWindow) + (Capacity * w.Capacity) + (Overtime * w.Overtime)
-        + (Duration * w.Duration) + (Skill * w.Skill) + (Unserved * w.Unserved);
+        + (Duration * w.Duration) + (Equipment * w.Equipment) + (Unserved * w.Unserved);
 
     /// <summary>Sum over the route-level rules (all but unserved), in their own units.</summary>
-    public readonly double RouteTotal => TimeWindow + Capacity + Overtime + Duration + Skill;
+    public readonly double RouteTotal => TimeWindow + Capacity + Overtime + Duration + Equipment;
 }

@@ -90,7 +90,7 @@ public sealed class SearchState
         {
             var hull = instance.Hull(i);
             _node[i] = Segment.Node(i, instance.ServiceTime(i), hull.Open, hull.Close,
-                Dim(instance, i, 0), Dim(instance, i, 1), Dim(instance, i, 2), Dim(instance, i, 3), instance.Stops[i].RequiredSkills);
+                Dim(instance, i, 0), Dim(instance, i, 1), Dim(instance, i, 2), Dim(instance, i, 3), instance.Stops[i].Needs);
         }
 
         _depotStart = new Segment[RouteCount];
@@ -205,7 +205,7 @@ public sealed class SearchState
             v.Capacity += rules.Capacity.Hard ? m.Overload : 0;
             v.Overtime += rules.ShiftEnd.Hard ? m.Overtime : 0;
             v.Duration += rules.MaxDuration.Hard ? m.DurationExcess : 0;
-            v.Skill += m.MissingSkills;
+            v.Equipment += m.MissingEquipment;
         }
 
         v.Unserved = _mandatoryUnserved;
@@ -341,7 +341,7 @@ public sealed class SearchState
             parts.Violation.Duration += Amount(m.DurationExcess, m) - Amount(old.DurationExcess, old);
         }
 
-        parts.Violation.Skill += Amount(m.MissingSkills, m) - Amount(old.MissingSkills, old);
+        parts.Violation.Equipment += Amount(m.MissingEquipment, m) - Amount(old.MissingEquipment, old);
         return CostModel.RouteFeasible(Instance, m);
     }
 
@@ -566,7 +566,7 @@ public sealed class SearchState
         m.Overtime = Math.Max(0, m.Return - costs.ShiftEnd(vehicle));
         m.DurationExcess = Math.Max(0, m.Duration - costs.MaxDuration(vehicle));
         m.Overload = Overload(vehicle, in acc);
-        m.MissingSkills = System.Numerics.BitOperations.PopCount(acc.Skills & ~costs.Skills(vehicle));
+        m.MissingEquipment = System.Numerics.BitOperations.PopCount(acc.Needs & ~costs.Equipment(vehicle));
         return m;
     }
 

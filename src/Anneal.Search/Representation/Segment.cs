@@ -5,7 +5,7 @@ namespace Anneal.Search.Representation;
 /// <summary>
 /// Summary of a run of consecutive stops for O(1) concatenation (Savelsbergh 1985; Vidal et al. 2013, C&amp;OR 40(1)):
 /// duration D (travel + service + waiting, time warp included), time warp TW, earliest and latest start E and L
-/// that achieve them, distance, load per dimension (up to four) and the union of required skills.
+/// that achieve them, distance, load per dimension (up to four) and the union of the equipment the stops need.
 /// </summary>
 public struct Segment
 {
@@ -24,9 +24,9 @@ public struct Segment
     public double Load1;
     public double Load2;
     public double Load3;
-    public ulong Skills;
+    public ulong Needs;
 
-    public static Segment Node(int location, double service, double open, double close, double load0, double load1, double load2, double load3, ulong skills) => new()
+    public static Segment Node(int location, double service, double open, double close, double load0, double load1, double load2, double load3, ulong needs) => new()
     {
         First = location,
         Last = location,
@@ -38,7 +38,7 @@ public struct Segment
         Load1 = load1,
         Load2 = load2,
         Load3 = load3,
-        Skills = skills,
+        Needs = needs,
     };
 
     /// <summary>A depot visit with no service; Count 0 so it does not count as a stop.</summary>
@@ -71,6 +71,6 @@ public struct Segment
         a.Load1 += b.Load1;
         a.Load2 += b.Load2;
         a.Load3 += b.Load3;
-        a.Skills |= b.Skills;
+        a.Needs |= b.Needs;
     }
 }

@@ -32,7 +32,7 @@ public sealed class PenaltyAdapter
         _weights.Capacity = Step(_weights.Capacity, v.Capacity > 0);
         _weights.Overtime = Step(_weights.Overtime, v.Overtime > 0);
         _weights.Duration = Step(_weights.Duration, v.Duration > 0);
-        _weights.Skill = Step(_weights.Skill, v.Skill > 0);
+        _weights.Equipment = Step(_weights.Equipment, v.Equipment > 0);
         state.SetWeights(_weights);
     }
 

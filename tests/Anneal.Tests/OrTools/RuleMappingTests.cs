@@ -61,10 +61,10 @@ public sealed class RuleMappingTests
     }
 
     [Fact]
-    public void Skills()
+    public void Equipment()
     {
-        var instance = Line([Stop("a", 10), Stop("b", -10, skills: 1)], [Vehicle("v1"), Vehicle("v2", skills: 1)], RuleSet.AllHard);
-        SameVerdict(instance, Together, false); // v1 lacks the skill b needs
+        var instance = Line([Stop("a", 10), Stop("b", -10, needs: 1)], [Vehicle("v1"), Vehicle("v2", equipment: 1)], RuleSet.AllHard);
+        SameVerdict(instance, Together, false); // v1 lacks the equipment b needs
         SameVerdict(instance, Apart, true);
     }
 

@@ -29,7 +29,7 @@ internal static class TinyInstances
                 Demand = [rng.Next(1, 20)],
                 ServiceTime = rng.Next(0, 10),
                 Windows = [new TimeWindow(open, open + rng.Next(30, 150))],
-                RequiredSkills = rng.Next(5) == 0 ? 1UL : 0UL,
+                Needs = rng.Next(5) == 0 ? 1UL : 0UL,
                 Optional = rng.Next(4) == 0,
                 UnservedPenalty = rng.Next(2) == 0 ? rng.Next(50, 300) : double.NaN,
             });
@@ -52,7 +52,7 @@ internal static class TinyInstances
                 FixedCost = second ? 20 : 60,
                 CostPerDistance = second ? 2 : 1,
                 CostPerHour = second ? 30 : 12,
-                Skills = second ? 0UL : 1UL,
+                Equipment = second ? 0UL : 1UL,
             });
         }
 
@@ -77,7 +77,7 @@ internal static class TinyInstances
             TravelTable.Planar(x, y, roundToInteger: true), "min");
     }
 
-    public static Stop Stop(string id, double x, double demand = 1, double open = 0, double close = 1000, bool optional = false, double penalty = double.NaN, ulong skills = 0) => new()
+    public static Stop Stop(string id, double x, double demand = 1, double open = 0, double close = 1000, bool optional = false, double penalty = double.NaN, ulong needs = 0) => new()
     {
         Id = id,
         X = x,
@@ -86,10 +86,10 @@ internal static class TinyInstances
         Windows = [new TimeWindow(open, close)],
         Optional = optional,
         UnservedPenalty = penalty,
-        RequiredSkills = skills,
+        Needs = needs,
     };
 
-    public static Vehicle Vehicle(string id, double capacity = 100, double shiftEnd = double.PositiveInfinity, double maxDuration = double.PositiveInfinity, double fixedCost = 0, ulong skills = 0) => new()
+    public static Vehicle Vehicle(string id, double capacity = 100, double shiftEnd = double.PositiveInfinity, double maxDuration = double.PositiveInfinity, double fixedCost = 0, ulong equipment = 0) => new()
     {
         Id = id,
         Capacity = [capacity],
@@ -97,6 +97,6 @@ internal static class TinyInstances
         MaxDuration = maxDuration,
         FixedCost = fixedCost,
         CostPerDistance = 1,
-        Skills = skills,
+        Equipment = equipment,
     };
 }

@@ -21,20 +21,20 @@ public class StopScreenTests
             rules ?? RuleSet.AllHard, Objective.Cost, TravelTable.Planar(x, y, false), unit, 60);
     }
 
-    private static Stop S(string id, double x, double kg = 1, ulong skills = 0, TimeWindow? window = null, double service = 0) => new()
+    private static Stop S(string id, double x, double kg = 1, ulong needs = 0, TimeWindow? window = null, double service = 0) => new()
     {
-        Id = id, X = x, Y = 0, Demand = [kg], RequiredSkills = skills, ServiceTime = service, Windows = [window ?? TimeWindow.Always],
+        Id = id, X = x, Y = 0, Demand = [kg], Needs = needs, ServiceTime = service, Windows = [window ?? TimeWindow.Always],
     };
 
-    private static Vehicle V(string id, double kg, ulong skills = 0, double start = 0, double end = 1440) => new()
+    private static Vehicle V(string id, double kg, ulong equipment = 0, double start = 0, double end = 1440) => new()
     {
-        Id = id, Capacity = [kg], Skills = skills, ShiftStart = start, ShiftEnd = end,
+        Id = id, Capacity = [kg], Equipment = equipment, ShiftStart = start, ShiftEnd = end,
     };
 
     [Fact]
     public void Serviceable_stops_give_no_findings()
     {
-        var inst = Build([S("a", 10), S("b", 20, kg: 5, skills: 1)], [V("v1", 10, skills: 1)]);
+        var inst = Build([S("a", 10), S("b", 20, kg: 5, needs: 1)], [V("v1", 10, equipment: 1)]);
         Assert.Empty(StopScreen.Screen(inst));
     }
 
@@ -50,10 +50,10 @@ public class StopScreenTests
     }
 
     [Fact]
-    public void Skills_must_be_covered_by_one_vehicle()
+    public void Needs_must_be_covered_by_one_vehicle()
     {
         // cold on one vehicle and lift on another: neither serves a stop that needs both.
-        var inst = Build([S("both", 10, skills: 3)], [V("c", 10, skills: 1), V("l", 10, skills: 2)]);
+        var inst = Build([S("both", 10, needs: 3)], [V("c", 10, equipment: 1), V("l", 10, equipment: 2)]);
         var f = Assert.Single(StopScreen.Screen(inst));
         Assert.Contains("cold + lift", f.Reason);
     }
@@ -93,8 +93,8 @@ public class StopScreenTests
     [Fact]
     public void Each_vehicle_failing_a_different_rule_is_explained()
     {
-        // v1 is big but lacks the skill; v2 has the skill but is too small.
-        var inst = Build([S("x", 10, kg: 8, skills: 1)], [V("v1", 10), V("v2", 5, skills: 1)]);
+        // v1 is big but lacks the equipment; v2 has it but is too small.
+        var inst = Build([S("x", 10, kg: 8, needs: 1)], [V("v1", 10), V("v2", 5, equipment: 1)]);
         var f = Assert.Single(StopScreen.Screen(inst));
         Assert.Contains("no single vehicle", f.Reason);
     }

@@ -30,7 +30,7 @@ public sealed class IncrementalEvaluationTests
         {
             var rng = new Random(seed);
             var instance = RandomInstances.Create(rng, rng.Next(6, 22), rng.Next(2, 5), hardWindows, multiWindows, dims, heterogeneous: seed % 2 == 1);
-            var weights = new PenaltyWeights { TimeWindow = 3.5, Capacity = 7, Overtime = 2, Duration = 1.5, Skill = 50, Unserved = 1000 };
+            var weights = new PenaltyWeights { TimeWindow = 3.5, Capacity = 7, Overtime = 2, Duration = 1.5, Equipment = 50, Unserved = 1000 };
             var state = new SearchState(instance, weights);
             Assert.Equal(hardWindows && !multiWindows, state.FastPath);
             state.Load(RandomPlan(rng, instance));
@@ -116,7 +116,7 @@ public sealed class IncrementalEvaluationTests
                 Assert.Equal(exact.Overtime, fast.Overtime, 6);
                 Assert.Equal(exact.DurationExcess, fast.DurationExcess, 6);
                 Assert.Equal(exact.Overload, fast.Overload, 6);
-                Assert.Equal(exact.MissingSkills, fast.MissingSkills);
+                Assert.Equal(exact.MissingEquipment, fast.MissingEquipment);
                 if (exact.StopCount > 0)
                 {
                     Assert.Equal(exact.Return, fast.Return, 6);

@@ -3,7 +3,7 @@ using Anneal.Core.Travel;
 
 namespace Anneal.Tests.Search;
 
-/// <summary>Small random instances for property tests: windows, several dimensions, skills, mixed rules.</summary>
+/// <summary>Small random instances for property tests: windows, several dimensions, equipment, mixed rules.</summary>
 internal static class RandomInstances
 {
     public static Instance Create(Random rng, int stops, int vehicles, bool hardWindows, bool multiWindows = false, int dims = 1, bool heterogeneous = false)
@@ -39,7 +39,7 @@ internal static class RandomInstances
                 Demand = demand,
                 ServiceTime = rng.Next(0, 15),
                 Windows = windows.ToArray(),
-                RequiredSkills = rng.Next(6) == 0 ? 1UL : 0UL,
+                Needs = rng.Next(6) == 0 ? 1UL : 0UL,
                 Optional = rng.Next(5) == 0,
                 UnservedPenalty = rng.Next(2) == 0 ? rng.Next(50, 400) : double.NaN,
             });
@@ -66,7 +66,7 @@ internal static class RandomInstances
                 FixedCost = rng.Next(0, 100),
                 CostPerDistance = rng.Next(1, 3),
                 CostPerHour = rng.Next(0, 30),
-                Skills = v % 2 == 0 ? 1UL : 0UL,
+                Equipment = v % 2 == 0 ? 1UL : 0UL,
             });
         }
 

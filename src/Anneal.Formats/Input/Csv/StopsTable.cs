@@ -2,19 +2,19 @@ using Anneal.Core.Model;
 
 namespace Anneal.Formats.Input.Csv;
 
-/// <summary>stops.csv: the places to serve, their demand per dimension, windows, skills and whether they may be skipped.</summary>
+/// <summary>stops.csv: the places to serve, their demand per dimension, windows, the equipment they need and whether they may be skipped.</summary>
 internal static class StopsTable
 {
     public const string FileName = "stops.csv";
 
     private const string DemandPrefix = "demand_";
 
-    private static readonly string[] Known = ["id", .. Coordinates.Columns, "service", "windows", "skills", "optional", "penalty"];
+    private static readonly string[] Known = ["id", .. Coordinates.Columns, "service", "windows", "needs", "optional", "penalty"];
 
     /// <param name="dimensions">The job's dimensions from vehicles.csv; null when vehicles.csv could not be read.</param>
-    /// <param name="vehicleSkills">Skills some vehicle offers; null when vehicles.csv could not be read.</param>
+    /// <param name="vehicleEquipment">Equipment some vehicle carries; null when vehicles.csv could not be read.</param>
     public static (List<Stop> Stops, IdRegistry Ids, CoordinateSystem System) Read(
-        CsvTable table, IReadOnlyList<string>? dimensions, IReadOnlySet<string>? vehicleSkills, SkillIndex skills, ProblemList problems)
+        CsvTable table, IReadOnlyList<string>? dimensions, IReadOnlySet<string>? vehicleEquipment, EquipmentIndex equipment, ProblemList problems)
     {
         HeaderCheck.Check(table, Known, [DemandPrefix], problems);
         bool hasId = HeaderCheck.Require(table, "id", "a unique name per stop", problems);
@@ -45,16 +45,16 @@ internal static class StopsTable
             }
 
             ulong needs = 0;
-            foreach (var skill in cells.List("skills"))
+            foreach (var item in cells.List("needs"))
             {
-                if (vehicleSkills is not null && !vehicleSkills.Contains(skill))
+                if (vehicleEquipment is not null && !vehicleEquipment.Contains(item))
                 {
-                    var near = Closest.Find(skill, vehicleSkills);
-                    cells.Report("skills", skill, "no vehicle offers this skill",
-                        near is not null ? $"did you mean '{near}'? Or add it to a vehicle's skills in vehicles.csv" : "add it to a vehicle's skills in vehicles.csv, or remove it from the stop");
+                    var near = Closest.Find(item, vehicleEquipment);
+                    cells.Report("needs", item, "no vehicle carries this equipment",
+                        near is not null ? $"did you mean '{near}'? Or add it to a vehicle's equipment in vehicles.csv" : "add it to a vehicle's equipment in vehicles.csv, or remove it from the stop");
                 }
 
-                needs |= skills.Bit(skill, cells, "skills");
+                needs |= equipment.Bit(item, cells, "needs");
             }
 
             stops.Add(new Stop
@@ -65,7 +65,7 @@ internal static class StopsTable
                 Demand = demand,
                 ServiceTime = cells.Duration("service", 0),
                 Windows = WindowText.Read(cells, "windows"),
-                RequiredSkills = needs,
+                Needs = needs,
                 Optional = cells.Flag("optional"),
                 UnservedPenalty = cells.Text("penalty").Length == 0 ? double.NaN : cells.Number("penalty", double.NaN, true, "the price of leaving the stop unserved"),
             });

@@ -10,13 +10,13 @@ internal static class VehiclesTable
     private const string CapacityPrefix = "capacity_";
 
     private static readonly string[] Known =
-        ["id", "count", "depot", "end_depot", "shift_start", "shift_end", "max_duration", "fixed_cost", "cost_per_km", "cost_per_hour", "skills"];
+        ["id", "count", "depot", "end_depot", "shift_start", "shift_end", "max_duration", "fixed_cost", "cost_per_km", "cost_per_hour", "equipment"];
 
     /// <summary>Largest count accepted, so a typo cannot ask for millions of vehicle records.</summary>
     private const int MaxCount = 10_000;
 
     public static (List<Vehicle> Vehicles, List<string> Dimensions) Read(
-        CsvTable table, IdRegistry depots, int depotCount, SkillIndex skills, ProblemList problems)
+        CsvTable table, IdRegistry depots, int depotCount, EquipmentIndex equipment, ProblemList problems)
     {
         HeaderCheck.Check(table, Known, [CapacityPrefix], problems);
         bool hasId = HeaderCheck.Require(table, "id", "a unique name per vehicle type", problems);
@@ -68,10 +68,10 @@ internal static class VehiclesTable
                 cells.Report("shift_end", cells.Text("shift_end"), $"the shift ends before it starts ({cells.Text("shift_start")})", "give shift_start no later than shift_end; a night shift may end after 24:00, e.g. 26:30");
             }
 
-            ulong skillBits = 0;
-            foreach (var skill in cells.List("skills"))
+            ulong equipmentBits = 0;
+            foreach (var item in cells.List("equipment"))
             {
-                skillBits |= skills.Bit(skill, cells, "skills");
+                equipmentBits |= equipment.Bit(item, cells, "equipment");
             }
 
             var template = new Vehicle
@@ -86,7 +86,7 @@ internal static class VehiclesTable
                 FixedCost = Cost(cells, "fixed_cost", "the fixed cost of using the vehicle"),
                 CostPerDistance = Cost(cells, "cost_per_km", "the cost per km"),
                 CostPerHour = Cost(cells, "cost_per_hour", "the cost per hour"),
-                Skills = skillBits,
+                Equipment = equipmentBits,
             };
             for (int k = 1; k <= count; k++)
             {

@@ -7,7 +7,7 @@ namespace Anneal.Tests.Formats.Csv;
 public class CsvJobReaderTests
 {
     [Fact]
-    public void Valid_job_loads_dimensions_skills_vehicles_windows_and_rules()
+    public void Valid_job_loads_dimensions_equipment_vehicles_windows_and_rules()
     {
         using var job = new JobFolder(JobFolder.ValidPlanar(), "small-job");
         var loaded = CsvJobReader.Read(job.Path);
@@ -18,7 +18,7 @@ public class CsvJobReaderTests
         Assert.Equal("min", inst.TimeUnit);
         Assert.Equal(60, inst.TimeUnitsPerHour);
         Assert.Equal(["kg", "m3"], inst.DimensionNames);
-        Assert.Equal(["cold", "lift"], inst.SkillNames); // vehicles' spelling and order; the stop's "Cold" matches case-insensitively
+        Assert.Equal(["cold", "lift"], inst.EquipmentNames); // vehicles' spelling and order; the stop's "Cold" matches case-insensitively
         Assert.Equal(["van-1", "van-2", "fridge"], inst.Vehicles.Select(v => v.Id));
 
         var van = inst.Vehicles[0];
@@ -28,8 +28,8 @@ public class CsvJobReaderTests
         Assert.Equal(50, van.FixedCost);
         Assert.Equal(0.4, van.CostPerDistance);
         Assert.Equal(22, van.CostPerHour);
-        Assert.Equal(0UL, van.Skills);
-        Assert.Equal(3UL, inst.Vehicles[2].Skills);
+        Assert.Equal(0UL, van.Equipment);
+        Assert.Equal(3UL, inst.Vehicles[2].Equipment);
         Assert.True(double.IsPositiveInfinity(inst.Vehicles[2].MaxDuration));
         Assert.NotSame(inst.Vehicles[0].Capacity, inst.Vehicles[1].Capacity);
 
@@ -43,7 +43,7 @@ public class CsvJobReaderTests
         Assert.Equal([20, 0], s2.Demand);
         Assert.True(s2.Optional);
         Assert.Equal(90, s2.UnservedPenalty);
-        Assert.Equal(1UL, s2.RequiredSkills);
+        Assert.Equal(1UL, s2.Needs);
         Assert.Equal([TimeWindow.Always], inst.Stops[2].Windows);
 
         Assert.Equal(Objective.Distance, inst.Objective);
@@ -65,10 +65,10 @@ public class CsvJobReaderTests
     {
         var files = JobFolder.ValidPlanar();
         files["stops.csv"] =
-            "id,x,y,demand_kg,service,windows,skills\n" +
+            "id,x,y,demand_kg,service,windows,needs\n" +
             "s1,3,4,10,0:10,08:00-25:99,\n" +   // row 2: bad time
             "s2,6,8,-5,15,,\n" +                 // row 3: negative demand
-            "s3,0,10,5,,,freezer\n" +            // row 4: unknown skill
+            "s3,0,10,5,,,freezer\n" +            // row 4: unknown equipment
             "s1,1,1,1,,,\n";                     // row 5: duplicate of row 2
         files["vehicles.csv"] = "id,depot,shift_start\nvan,hub,07:00\n"; // no capacity column
         using var job = new JobFolder(files);
@@ -78,7 +78,7 @@ public class CsvJobReaderTests
         Assert.Contains(p, x => x is { File: "vehicles.csv", Row: 1, Column: "capacity_<dim>" });
         Assert.Contains(p, x => x is { File: "stops.csv", Row: 2, Column: "windows", Value: "08:00-25:99" });
         Assert.Contains(p, x => x is { File: "stops.csv", Row: 3, Column: "demand_kg", Value: "-5" });
-        Assert.Contains(p, x => x is { File: "stops.csv", Row: 4, Column: "skills", Value: "freezer" });
+        Assert.Contains(p, x => x is { File: "stops.csv", Row: 4, Column: "needs", Value: "freezer" });
         var dup = Assert.Single(p, x => x is { File: "stops.csv", Row: 5, Column: "id", Value: "s1" });
         Assert.Contains("row 2", dup.Problem);
         // demand_kg has no capacity_kg now that vehicles.csv lost its capacity columns

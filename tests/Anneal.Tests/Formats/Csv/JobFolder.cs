@@ -29,17 +29,17 @@ internal sealed class JobFolder : IDisposable
         }
     }
 
-    /// <summary>A small valid planar job: two dimensions, skills, multiple windows, optional stops, vehicle counts.</summary>
+    /// <summary>A small valid planar job: two dimensions, equipment, multiple windows, optional stops, vehicle counts.</summary>
     public static Dictionary<string, string> ValidPlanar() => new()
     {
         ["stops.csv"] =
-            "id,x,y,demand_kg,demand_m3,service,windows,skills,optional,penalty,note\n" +
+            "id,x,y,demand_kg,demand_m3,service,windows,needs,optional,penalty,note\n" +
             "s1,3,4,10,1.5,0:10,08:00-10:30;14:00-16:00,,no,,first\n" +
             "s2,6,8,20,,15,09:00-12:00,Cold,yes,90,\n" +
             "s3,0,10,5,0.5,,,,,,\"quoted, with comma\"\n",
         ["depots.csv"] = "id,x,y\nhub,0,0\n",
         ["vehicles.csv"] =
-            "id,count,depot,capacity_kg,capacity_m3,shift_start,shift_end,max_duration,fixed_cost,cost_per_km,cost_per_hour,skills\n" +
+            "id,count,depot,capacity_kg,capacity_m3,shift_start,shift_end,max_duration,fixed_cost,cost_per_km,cost_per_hour,equipment\n" +
             "van,2,hub,100,8,07:30,26:15,8:00,50,0.4,22,\n" +
             "fridge,1,hub,80,6,08:00,18:00,,70,0.5,25,cold;lift\n",
         ["settings.json"] =

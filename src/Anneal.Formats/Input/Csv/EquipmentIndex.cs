@@ -1,9 +1,9 @@
 namespace Anneal.Formats.Input.Csv;
 
-/// <summary>Skill names and their bits: vehicles' skills first, in order of appearance (bit i = name i).</summary>
-internal sealed class SkillIndex
+/// <summary>Equipment names and their bits: what vehicles carry first, in order of appearance (bit i = name i).</summary>
+internal sealed class EquipmentIndex
 {
-    /// <summary>Skills are a 64-bit mask on stops and vehicles.</summary>
+    /// <summary>Equipment is a 64-bit mask on stops and vehicles.</summary>
     public const int Max = 64;
 
     private readonly Dictionary<string, int> _bits = new(StringComparer.OrdinalIgnoreCase);
@@ -13,14 +13,14 @@ internal sealed class SkillIndex
 
     public bool Contains(string name) => _bits.ContainsKey(name);
 
-    /// <summary>The skill's bit, adding the name when new; 0 (with a problem) past 64 skills.</summary>
+    /// <summary>The item's bit, adding the name when new; 0 (with a problem) past 64 items.</summary>
     public ulong Bit(string name, Cells cells, string column)
     {
         if (!_bits.TryGetValue(name, out int bit))
         {
             if (_names.Count >= Max)
             {
-                cells.Report(column, name, $"more than {Max} different skills in the job", $"use at most {Max} skill names");
+                cells.Report(column, name, $"more than {Max} different kinds of equipment in the job", $"use at most {Max} equipment names");
                 return 0;
             }
 
