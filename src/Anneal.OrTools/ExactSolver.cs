@@ -29,7 +29,7 @@ public sealed class ExactSolver : ISolver
         var clock = Stopwatch.StartNew();
         if (instance.StopCount > _settings.StopLimit)
         {
-            return new SolverResult(Name, Plan.Empty, 0, 0, [], $"not applicable: {instance.StopCount} stops > {_settings.StopLimit}");
+            return new SolverResult(Name, Plan.Empty, 0, 0, [], $"not applicable: {instance.StopCount} stops > {_settings.StopLimit}") { HasPlan = false };
         }
 
         var exact = new ExactModel(instance);
@@ -68,9 +68,18 @@ public sealed class ExactSolver : ISolver
                 double gap = objective > 0 ? (objective - lowerBound.Value) / objective : 0;
                 notes.Add(string.Create(CultureInfo.InvariantCulture, $"not proven optimal: lower bound {lowerBound:0.###}, gap {gap:P2}"));
                 break;
+            case CpSolverStatus.Infeasible:
+                result = "no solution (infeasible)";
+                notes = ["CP-SAT proved that its integer model has no plan that keeps every hard rule"];
+                break;
             default:
                 result = cancel.IsCancellationRequested ? "interrupted" : $"no solution ({status.ToString().ToLowerInvariant()})";
                 break;
+        }
+
+        if (keeper.Best is null && status != CpSolverStatus.Infeasible)
+        {
+            notes.Clear(); // what the model approximates only matters for a plan, and there is none
         }
 
         double total = clock.Elapsed.TotalSeconds;
@@ -79,7 +88,7 @@ public sealed class ExactSolver : ISolver
             trace.Finish(new TracePoint(total, keeper.Solutions, best.Objective, best.Objective, best.Feasible, result));
         }
 
-        return new SolverResult(Name, keeper.BestPlan, total, trace.SecondsToBest, trace.Points, result, lowerBound, notes);
+        return new SolverResult(Name, keeper.BestPlan, total, trace.SecondsToBest, trace.Points, result, lowerBound, notes) { HasPlan = keeper.Best is not null };
     }
 
     /// <summary>Judges every CP-SAT solution with Anneal's evaluator and traces the improvements.</summary>

@@ -87,7 +87,8 @@ public sealed class OrToolsSolver : ISolver
         GC.KeepAlive(atSolution);
         GC.KeepAlive(cancelled);
 
-        var notes = new List<string>(mapping.Notes)
+        // What the mapping approximates only matters for a plan; without one, say only how the search went.
+        var notes = new List<string>(best is null ? [] : mapping.Notes)
         {
             $"first solution {_settings.FirstSolution}, metaheuristic {_settings.Metaheuristic}; {solutions} solutions accepted",
         };
@@ -105,7 +106,7 @@ public sealed class OrToolsSolver : ISolver
             trace.Finish(new TracePoint(seconds, solutions, best.Objective, best.Objective, best.Feasible, "end"));
         }
 
-        var result = new SolverResult(Name, bestPlan, seconds, trace.SecondsToBest, trace.Points, status, null, notes);
+        var result = new SolverResult(Name, bestPlan, seconds, trace.SecondsToBest, trace.Points, status, null, notes) { HasPlan = best is not null };
         return new OrToolsRun(result, engineObjective, routingStatus);
     }
 }

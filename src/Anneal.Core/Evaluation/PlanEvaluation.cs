@@ -56,9 +56,8 @@ public sealed record PlanEvaluation(
         }
     }
 
-    /// <summary>Ranking of plans: a feasible plan beats an infeasible one, then the lower objective wins.</summary>
-    public bool IsBetterThan(PlanEvaluation other) =>
-        (Feasible && !other.Feasible) || (Feasible == other.Feasible && Objective < other.Objective - 1e-9);
+    /// <summary>This plan comes strictly before <paramref name="other"/> in <see cref="PlanRanking"/>'s order.</summary>
+    public bool IsBetterThan(PlanEvaluation other) => PlanRanking.IsBetter(this, other);
 
     public int VehiclesUsed => Routes.Count(r => r.Stops.Length > 0);
     public double Distance => Routes.Sum(r => r.Metrics.Distance);

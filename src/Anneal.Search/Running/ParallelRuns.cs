@@ -24,15 +24,16 @@ public static class ParallelRuns
             t.Join();
         }
 
-        int best = 0;
-        var judged = new PlanEvaluation[n];
+        var judged = new PlanEvaluation?[n];
         for (int k = 0; k < n; k++)
         {
-            judged[k] = PlanEvaluator.Evaluate(instance, results[k].Plan);
-            if (judged[k].IsBetterThan(judged[best]))
-            {
-                best = k;
-            }
+            judged[k] = results[k].HasPlan ? PlanEvaluator.Evaluate(instance, results[k].Plan) : null;
+        }
+
+        int best = PlanRanking.Best(judged);
+        if (!results[best].HasPlan)
+        {
+            return results[best];
         }
 
         var notes = new List<string>(results[best].Notes ?? []) { $"best of {n} independent runs (seeds {options.Seed} + 1000·k)" };

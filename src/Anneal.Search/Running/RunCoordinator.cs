@@ -4,9 +4,13 @@ using Anneal.Core.Model;
 namespace Anneal.Search.Running;
 
 /// <summary>A solver's result with the evaluator's verdict on its plan.</summary>
-public sealed record JudgedResult(SolverResult Result, PlanEvaluation Evaluation);
+public sealed record JudgedResult(SolverResult Result, PlanEvaluation Evaluation)
+{
+    /// <summary>The verdict to rank, or null when the solver found no plan.</summary>
+    public PlanEvaluation? Ranked => Result.HasPlan ? Evaluation : null;
+}
 
-/// <summary>All solvers' results and the plan chosen among them (feasible first, then lowest objective).</summary>
+/// <summary>All solvers' results and the plan chosen among them (in <see cref="PlanRanking"/>'s order).</summary>
 public sealed record RunOutcome(IReadOnlyList<JudgedResult> Results, int Chosen)
 {
     public JudgedResult Best => Results[Chosen];
@@ -57,19 +61,16 @@ public static class RunCoordinator
         return new RunOutcome(judged, Choose(judged));
     }
 
-    /// <summary>Feasible plans beat infeasible ones; then the lower objective; ties go to the earlier solver.</summary>
+    /// <summary>The first result that no later one beats in <see cref="PlanRanking"/>'s order; a solver without a plan is never chosen over one with.</summary>
     public static int Choose(IReadOnlyList<JudgedResult> judged)
     {
-        int best = 0;
-        for (int k = 1; k < judged.Count; k++)
+        var ranked = new PlanEvaluation?[judged.Count];
+        for (int k = 0; k < ranked.Length; k++)
         {
-            if (judged[k].Evaluation.IsBetterThan(judged[best].Evaluation))
-            {
-                best = k;
-            }
+            ranked[k] = judged[k].Ranked;
         }
 
-        return best;
+        return PlanRanking.Best(ranked);
     }
 
     private sealed class SynchronousProgress(Action<TracePoint> report) : IProgress<TracePoint>

@@ -13,4 +13,8 @@ public sealed record SolverResult(
     IReadOnlyList<TracePoint> Trace,
     string Status,
     double? LowerBound = null,
-    IReadOnlyList<string>? Notes = null);
+    IReadOnlyList<string>? Notes = null)
+{
+    /// <summary>False when the solver found no plan at all (its <see cref="Plan"/> is then empty and must never be chosen).</summary>
+    public bool HasPlan { get; init; } = true;
+}
