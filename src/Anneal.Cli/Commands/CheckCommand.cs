@@ -31,7 +31,7 @@ public static class CheckCommand
         }
 
         var instance = loaded.Instance;
-        context.Out.WriteLine($"{path}: valid ({loaded.Format})");
+        context.Out.WriteLine($"{path}: valid ({loaded.Format}{(loaded.ReadAs is null ? string.Empty : ", " + loaded.ReadAs)})");
         context.Out.WriteLine("  " + InstanceDescription.Size(instance));
         context.Out.WriteLine("  " + InstanceDescription.Rules(instance));
         var findings = StopScreen.Screen(instance);

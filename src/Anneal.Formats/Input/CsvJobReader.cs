@@ -55,7 +55,28 @@ public static class CsvJobReader
 
         problems.ThrowIfAny();
         var instance = Build(folder, stops!.Value.Stops, stops.Value.System, depots!.Value.Depots, vehicles!, dimensions!, equipment, settings, matrix);
-        return new LoadedInput(instance, settings.Job, Format, folder);
+        return new LoadedInput(instance, settings.Job, Format, folder) { ReadAs = ReadAs([depotTable, vehicleTable, stopTable, matrixTable]) };
+    }
+
+    /// <summary>The dialect in words: once when every file shares it, else per file.</summary>
+    private static string ReadAs(CsvTable?[] tables)
+    {
+        var read = new List<(string File, string Dialect)>();
+        foreach (var table in tables)
+        {
+            if (table is not null)
+            {
+                read.Add((table.File, table.Dialect.Name + (table.DecimalCommasRead > 0 ? ", decimal commas" : string.Empty)));
+            }
+        }
+
+        var first = read[0].Dialect;
+        if (read.TrueForAll(r => r.Dialect == first))
+        {
+            return first;
+        }
+
+        return string.Join("; ", read.Select(r => r.File + " " + r.Dialect));
     }
 
     private static Instance Build(string folder, List<Stop> stops, CoordinateSystem system, List<Depot> depots, List<Vehicle> vehicles,

@@ -61,9 +61,11 @@ internal readonly struct Cells(CsvTable table, CsvRow row, ProblemList problems)
             return fallback;
         }
 
-        if (!double.TryParse(text, NumberStyles.Float, CultureInfo.InvariantCulture, out double value) || !double.IsFinite(value))
+        if (!double.TryParse(Decimal(text), NumberStyles.Float, CultureInfo.InvariantCulture, out double value) || !double.IsFinite(value))
         {
-            Report(column, text, "not a number", $"write {meaning} as a plain number with a dot for decimals, e.g. 12.5");
+            Report(column, text, "not a number", table.Dialect.DecimalComma
+                ? $"write {meaning} as a plain number, e.g. 12,5 or 12.5, without thousands separators"
+                : $"write {meaning} as a plain number with a dot for decimals, e.g. 12.5");
             return fallback;
         }
 
@@ -74,6 +76,27 @@ internal readonly struct Cells(CsvTable table, CsvRow row, ProblemList problems)
         }
 
         return value;
+    }
+
+    /// <summary>
+    /// The text with its decimal comma turned into a point when the file's dialect has decimal commas ("12,5" is 12.5);
+    /// a text with both a comma and a point is left alone, so that "1.234,5" fails rather than being guessed.
+    /// </summary>
+    public string Decimal(string text)
+    {
+        if (!table.Dialect.DecimalComma)
+        {
+            return text;
+        }
+
+        int comma = text.IndexOf(',', StringComparison.Ordinal);
+        if (comma < 0 || text.IndexOf(',', comma + 1) >= 0 || text.Contains('.', StringComparison.Ordinal) || text.Contains(':', StringComparison.Ordinal))
+        {
+            return text;
+        }
+
+        table.DecimalCommasRead++;
+        return string.Concat(text.AsSpan(0, comma), ".", text.AsSpan(comma + 1));
     }
 
     public double Time(string column, double fallback) => Clock(column, fallback, TimeText.TryParseTime, "not a valid time",
@@ -92,7 +115,7 @@ internal readonly struct Cells(CsvTable table, CsvRow row, ProblemList problems)
             return fallback;
         }
 
-        if (!parse(text, out double t))
+        if (!parse(Decimal(text), out double t))
         {
             Report(column, text, problem, fix);
             return fallback;

@@ -5,12 +5,18 @@ using CsvHelper.Configuration;
 namespace Anneal.Formats.Input.Csv;
 
 /// <summary>
-/// A CSV file read into a header and rows, each row knowing its physical line. Quoting faults found by CsvHelper
-/// become problems on the line where the record starts; they never escape as exceptions.
+/// A CSV file read into a header and rows, each row knowing its physical line. The separator (',', ';' or tab) is
+/// found from the header line. Quoting faults found by CsvHelper become problems on the line where the record
+/// starts; they never escape as exceptions.
 /// </summary>
 internal sealed class CsvTable
 {
     public required string File { get; init; }
+
+    public CsvDialect Dialect { get; init; } = CsvDialect.Comma;
+
+    /// <summary>Numbers read with a decimal comma, so that `check` can say the file used them.</summary>
+    public int DecimalCommasRead { get; set; }
 
     /// <summary>Header names as written (trimmed); look-ups are case-insensitive.</summary>
     public required IReadOnlyList<string> Header { get; init; }
@@ -38,10 +44,12 @@ internal sealed class CsvTable
         var records = new List<CsvRow>();
         int line = 1;
         int recordStart = 1;
+        var dialect = CsvDialect.Detect(text);
         var config = new CsvConfiguration(CultureInfo.InvariantCulture)
         {
             IgnoreBlankLines = false,
             DetectDelimiter = false,
+            Delimiter = dialect.Delimiter.ToString(),
             BadDataFound = args => problems.Add(file, recordStart, null, Shorten(args.Field),
                 "badly placed double quote (a quoted field must be quoted from its first to its last character, and every quote inside it doubled)",
                 "quote the whole field and write each \" inside it as \"\""),
@@ -91,17 +99,18 @@ internal sealed class CsvTable
         }
 
         var rows = records.GetRange(1, records.Count - 1);
+        string separator = dialect.Delimiter switch { ';' => "semicolons", '\t' => "tabs", _ => "commas" };
         foreach (var row in rows)
         {
             if (row.Cells.Length != header.Length)
             {
                 problems.Add(file, row.Line, null, null,
-                    $"the line has {row.Cells.Length} fields but the header has {header.Length}",
-                    "give one value per header column (leave a value empty between commas) and quote values that contain commas");
+                    $"the line has {row.Cells.Length} fields but the header has {header.Length} ({dialect.Name}, as the header line is)",
+                    $"give one value per header column (leave a value empty between {separator}) and quote values that contain {separator}");
             }
         }
 
-        return new CsvTable { File = file, Header = header, Rows = rows };
+        return new CsvTable { File = file, Header = header, Rows = rows, Dialect = dialect };
     }
 
     private static int LineBreaks(string raw)

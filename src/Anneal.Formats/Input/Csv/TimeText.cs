@@ -2,7 +2,10 @@ using System.Globalization;
 
 namespace Anneal.Formats.Input.Csv;
 
-/// <summary>Times of day and durations as the CSV job writes them: <c>HH:MM</c>, <c>H:MM</c> or plain minutes.</summary>
+/// <summary>
+/// Times of day and durations as the CSV job writes them: <c>HH:MM</c>, <c>H:MM</c> or plain minutes; a trailing
+/// <c>:SS</c> (as spreadsheets export time cells, e.g. 08:00:00) is accepted too.
+/// </summary>
 public static class TimeText
 {
     /// <summary>Largest hour of a time of day: two days cover night shifts that end the next morning.</summary>
@@ -27,6 +30,18 @@ public static class TimeText
 
         var h = s.AsSpan(0, colon);
         var m = s.AsSpan(colon + 1);
+        int secs = 0;
+        if (m.Length == 5 && m[2] == ':')
+        {
+            var sec = m[3..];
+            if (!AllDigits(sec) || (secs = int.Parse(sec, NumberStyles.None, CultureInfo.InvariantCulture)) > 59)
+            {
+                return false;
+            }
+
+            m = m[..2];
+        }
+
         if (h.Length == 0 || m.Length != 2 || !AllDigits(h) || !AllDigits(m))
         {
             return false;
@@ -43,7 +58,7 @@ public static class TimeText
             return false;
         }
 
-        minutes = (hours * 60.0) + mins;
+        minutes = (hours * 60.0) + mins + (secs / 60.0);
         return true;
     }
 

@@ -12,6 +12,8 @@ public class TimeTextTests
     [InlineData("0:00", 0)]
     [InlineData("90", 90)]
     [InlineData("12.5", 12.5)]
+    [InlineData("08:00:00", 480)]   // a spreadsheet's time cell exported with seconds
+    [InlineData("08:00:30", 480.5)]
     public void Valid_times(string text, double minutes)
     {
         Assert.True(TimeText.TryParseTime(text, out double t));
@@ -22,6 +24,8 @@ public class TimeTextTests
     [InlineData("25:99")]
     [InlineData("48:00")]
     [InlineData("7:5")]
+    [InlineData("08:00:60")]
+    [InlineData("08:00:5")]
     [InlineData("-5")]
     [InlineData("ab:cd")]
     [InlineData("NaN")]
