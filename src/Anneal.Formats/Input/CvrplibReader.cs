@@ -136,11 +136,19 @@ public static class CvrplibReader
             log.Add(line.Row, "x", line.Tokens[1], "not a finite number", fix);
             ok = false;
         }
+        else
+        {
+            ok &= log.InRange(line.Row, "x", line.Tokens[1], x, Limits.BenchmarkCoordinate, "the x coordinate");
+        }
 
         if (!Numbers.TryFinite(line.Tokens[2], out double y))
         {
             log.Add(line.Row, "y", line.Tokens[2], "not a finite number", fix);
             ok = false;
+        }
+        else
+        {
+            ok &= log.InRange(line.Row, "y", line.Tokens[2], y, Limits.BenchmarkCoordinate, "the y coordinate");
         }
 
         if (ok && !file.Coords.TryAdd(node, (line.Row, x, y)))
@@ -163,6 +171,10 @@ public static class CvrplibReader
         {
             log.Add(line.Row, "demand", line.Tokens[1], "the demand is not a finite number of at least 0", fix);
             ok = false;
+        }
+        else
+        {
+            ok &= log.InRange(line.Row, "demand", line.Tokens[1], demand, Limits.BenchmarkQuantity, "the demand");
         }
 
         if (ok && !file.Demands.TryAdd(node, (line.Row, demand)))
@@ -239,7 +251,10 @@ public static class CvrplibReader
         {
             if (Numbers.TryFinite(cap, out double q) && q > 0)
             {
-                spec.Capacity = q;
+                if (log.InRange(file.Header["CAPACITY"].Row, "CAPACITY", cap, q, Limits.BenchmarkQuantity, "the vehicle capacity"))
+                {
+                    spec.Capacity = q;
+                }
             }
             else
             {

@@ -9,6 +9,15 @@ namespace Anneal.Formats.Input;
 /// <param name="Fix">How to put it right.</param>
 public sealed record InputProblem(string File, int? Row, string? Column, string? Value, string Problem, string Fix)
 {
+    // User text is capped once here, so no message, error.txt or JSON output quotes more than a short piece of it.
+    public string? Column { get; init; } = Quote.CapOrNull(Column);
+
+    public string? Value { get; init; } = Quote.CapOrNull(Value);
+
+    public string Problem { get; init; } = Quote.Cap(Problem, Quote.TextCharacters);
+
+    public string Fix { get; init; } = Quote.Cap(Fix, Quote.TextCharacters);
+
     public override string ToString()
     {
         var where = File;

@@ -109,6 +109,10 @@ public static class SolomonReader
                 log.Add(line.Row, "CAPACITY", line.Tokens[1], "the capacity is not a finite number of at least 0",
                     "write the vehicle capacity as a non-negative number");
             }
+            else if (!log.InRange(line.Row, "CAPACITY", line.Tokens[1], capacity, Limits.BenchmarkQuantity, "the vehicle capacity"))
+            {
+                capacity = 0;
+            }
 
             return (count, capacity);
         }
@@ -211,6 +215,18 @@ public static class SolomonReader
             log.Add(line.Row, Columns[6], line.Tokens[6], "the service time is negative", "write a service time of at least 0");
             ok = false;
         }
+
+        if (!ok)
+        {
+            return false;
+        }
+
+        ok &= log.InRange(line.Row, Columns[1], line.Tokens[1], v[1], Limits.BenchmarkCoordinate, "the x coordinate");
+        ok &= log.InRange(line.Row, Columns[2], line.Tokens[2], v[2], Limits.BenchmarkCoordinate, "the y coordinate");
+        ok &= log.InRange(line.Row, Columns[3], line.Tokens[3], v[3], Limits.BenchmarkQuantity, "the demand");
+        ok &= log.InRange(line.Row, Columns[4], line.Tokens[4], v[4], Limits.BenchmarkTime, "the ready time");
+        ok &= log.InRange(line.Row, Columns[5], line.Tokens[5], v[5], Limits.BenchmarkTime, "the due date");
+        ok &= log.InRange(line.Row, Columns[6], line.Tokens[6], v[6], Limits.BenchmarkTime, "the service time");
 
         return ok;
     }

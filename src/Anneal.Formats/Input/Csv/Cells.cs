@@ -99,8 +99,49 @@ internal readonly struct Cells(CsvTable table, CsvRow row, ProblemList problems)
         return string.Concat(text.AsSpan(0, comma), ".", text.AsSpan(comma + 1));
     }
 
+    /// <summary>A number within <paramref name="range"/> (see <see cref="Limits"/>); <paramref name="fallback"/> when empty or out of range.</summary>
+    public double Number(string column, double fallback, NumberRange range, string meaning)
+    {
+        if (Text(column).Length == 0)
+        {
+            return Number(column, fallback, false, meaning); // reports an empty required cell
+        }
+
+        double value = Number(column, double.NaN, range.Min >= 0, meaning);
+        if (double.IsNaN(value))
+        {
+            return fallback;
+        }
+
+        return InRange(column, value, range, meaning) ? value : fallback;
+    }
+
+    /// <summary>Reports <paramref name="value"/> when it lies outside <paramref name="range"/>.</summary>
+    public bool InRange(string column, double value, NumberRange range, string meaning)
+    {
+        if (range.Contains(value))
+        {
+            return true;
+        }
+
+        Report(column, Text(column), Limits.Problem(range), Limits.Fix(range, meaning));
+        return false;
+    }
+
+    /// <summary>A duration within <paramref name="range"/>; <paramref name="fallback"/> when empty, malformed or out of range.</summary>
+    public double Duration(string column, double fallback, NumberRange range, string meaning)
+    {
+        double value = Duration(column, double.NaN);
+        if (double.IsNaN(value))
+        {
+            return fallback;
+        }
+
+        return InRange(column, value, range, meaning) ? value : fallback;
+    }
+
     public double Time(string column, double fallback) => Clock(column, fallback, TimeText.TryParseTime, "not a valid time",
-        "write HH:MM with HH from 0 to 47 and MM from 00 to 59 (e.g. 07:30), or minutes since midnight");
+        "write HH:MM with HH from 0 to 47 and MM from 00 to 59 (e.g. 07:30), or minutes since midnight from 0 to 2880 (the job's day and the next)");
 
     public double Duration(string column, double fallback) => Clock(column, fallback, TimeText.TryParseDuration, "not a valid duration",
         "write H:MM with MM from 00 to 59 (e.g. 0:15), or a number of minutes");

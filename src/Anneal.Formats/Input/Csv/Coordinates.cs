@@ -37,8 +37,8 @@ internal static class Coordinates
         switch (system)
         {
             case CoordinateSystem.Planar:
-                return (Zero(cells.Number("x", double.NaN, false, "the x coordinate in km")),
-                        Zero(cells.Number("y", double.NaN, false, "the y coordinate in km")));
+                return (Zero(cells.Number("x", double.NaN, Limits.PlanarKm, "the x coordinate in km")),
+                        Zero(cells.Number("y", double.NaN, Limits.PlanarKm, "the y coordinate in km")));
             case CoordinateSystem.LatLon:
                 double lat = Zero(cells.Number("lat", double.NaN, false, "the latitude in degrees"));
                 double lon = Zero(cells.Number("lon", double.NaN, false, "the longitude in degrees"));

@@ -29,7 +29,7 @@ internal static class MatrixTable
             var cells = new Cells(table, row, problems);
             var from = cells.Required("from", "a stop or depot id");
             var to = cells.Required("to", "a stop or depot id");
-            double dist = cells.Number("distance", double.NaN, true, "the distance in km");
+            double dist = cells.Number("distance", double.NaN, Limits.TripKm, "the distance in km");
             double time = TimeOrNaN(cells);
             int a = Locate(from, "from", cells, locations, unknown);
             int b = Locate(to, "to", cells, locations, unknown);
@@ -74,7 +74,7 @@ internal static class MatrixTable
             return double.NaN;
         }
 
-        return cells.Duration("duration", double.NaN);
+        return cells.Duration("duration", double.NaN, Limits.TripMinutes, "the travel time");
     }
 
     private static int Locate(string? id, string column, Cells cells, IReadOnlyDictionary<string, int> locations, List<(Cells, string, string)> unknown)

@@ -79,7 +79,7 @@ internal sealed record SettingsFile
                         result = result with { Objective = objective };
                         break;
                     case "timeSeconds":
-                        if (Positive(value, line, key, "the search time budget in seconds") is double seconds)
+                        if (Within(value, line, key, Limits.TimeSeconds, "the search time budget in seconds") is double seconds)
                         {
                             job = job with { TimeSeconds = seconds };
                         }
@@ -118,7 +118,9 @@ internal sealed record SettingsFile
 
             foreach (var (key, keyLine, value) in Members(travel, TravelKeys, "travel."))
             {
-                double? v = Positive(value, keyLine, "travel." + key, key == "speedKmh" ? "the average speed in km/h" : "the ratio of road to straight-line distance");
+                double? v = key == "speedKmh"
+                    ? Within(value, keyLine, "travel." + key, Limits.SpeedKmh, "the average speed in km/h")
+                    : Within(value, keyLine, "travel." + key, Limits.DetourFactor, "the ratio of road to straight-line distance");
                 if (v is double d)
                 {
                     result = key == "speedKmh" ? result with { SpeedKmh = d } : result with { DetourFactor = d };
@@ -168,6 +170,7 @@ internal sealed record SettingsFile
 
             bool hard = true;
             double price = 0;
+            bool priceReported = false;
             int priceLine = line;
             foreach (var (key, keyLine, v) in Members(value, ["hard", priceKey], $"rules.{name}."))
             {
@@ -184,6 +187,12 @@ internal sealed record SettingsFile
                 else if (v.Kind != JsonTokenType.Number || !double.IsFinite(v.Number))
                 {
                     Add(keyLine, $"rules.{name}.{priceKey}", v.Shown, "not a number", "give the price as a number, e.g. 2.5");
+                    priceReported = true;
+                }
+                else if (v.Number > Limits.Price.Max)
+                {
+                    Add(keyLine, $"rules.{name}.{priceKey}", v.Shown, Limits.Problem(Limits.Price), Limits.Fix(Limits.Price, "the price"));
+                    priceReported = true;
                 }
                 else
                 {
@@ -192,7 +201,7 @@ internal sealed record SettingsFile
                 }
             }
 
-            if (!hard && price <= 0)
+            if (!hard && price <= 0 && !priceReported)
             {
                 Add(priceLine, $"rules.{name}.{priceKey}", price.ToString(System.Globalization.CultureInfo.InvariantCulture),
                     "a soft rule needs a positive price", $"give {priceKey} > 0, or make the rule hard");
@@ -226,11 +235,17 @@ internal sealed record SettingsFile
             return null;
         }
 
-        private double? Positive(JsonTree value, int line, string key, string meaning)
+        private double? Within(JsonTree value, int line, string key, NumberRange range, string meaning)
         {
-            if (value.Kind != JsonTokenType.Number || !double.IsFinite(value.Number) || value.Number <= 0)
+            if (value.Kind != JsonTokenType.Number || !double.IsFinite(value.Number))
             {
-                Add(line, key, value.Shown, "not a positive number", $"give {meaning} as a number above zero");
+                Add(line, key, value.Shown, "not a number", Limits.Fix(range, meaning));
+                return null;
+            }
+
+            if (!range.Contains(value.Number))
+            {
+                Add(line, key, value.Shown, Limits.Problem(range), Limits.Fix(range, meaning));
                 return null;
             }
 

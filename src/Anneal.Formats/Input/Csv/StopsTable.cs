@@ -37,7 +37,7 @@ internal static class StopsTable
             foreach (var (column, d) in demandColumn)
             {
                 // Unmatched columns are still checked, so every bad cell is reported in one pass.
-                double value = cells.Number(column, 0, true, "the demand");
+                double value = cells.Number(column, 0, Limits.Quantity, "the demand");
                 if (d >= 0)
                 {
                     demand[d] = value;
@@ -63,11 +63,11 @@ internal static class StopsTable
                 X = x,
                 Y = y,
                 Demand = demand,
-                ServiceTime = cells.Duration("service", 0),
+                ServiceTime = cells.Duration("service", 0, Limits.Service, "the service time"),
                 Windows = WindowText.Read(cells, "windows"),
                 Needs = needs,
                 Optional = cells.Flag("optional"),
-                UnservedPenalty = cells.Text("penalty").Length == 0 ? double.NaN : cells.Number("penalty", double.NaN, true, "the price of leaving the stop unserved"),
+                UnservedPenalty = cells.Text("penalty").Length == 0 ? double.NaN : cells.Number("penalty", double.NaN, Limits.Price, "the price of leaving the stop unserved"),
             });
         }
 

@@ -11,8 +11,9 @@ public static class TimeText
     /// <summary>Largest hour of a time of day: two days cover night shifts that end the next morning.</summary>
     public const int MaxHour = 47;
 
-    /// <summary>A time of day in minutes since midnight: <c>HH:MM</c> (HH 0–47, MM 00–59) or non-negative minutes.</summary>
-    public static bool TryParseTime(string text, out double minutes) => TryParse(text, MaxHour, out minutes);
+    /// <summary>A time of day in minutes since midnight: <c>HH:MM</c> (HH 0–47, MM 00–59) or minutes from 0 to 2880.</summary>
+    public static bool TryParseTime(string text, out double minutes) =>
+        TryParse(text, MaxHour, out minutes) && Limits.TimeOfDay.Contains(minutes);
 
     /// <summary>A duration in minutes: <c>H:MM</c> (any hours, MM 00–59) or non-negative minutes.</summary>
     public static bool TryParseDuration(string text, out double minutes) => TryParse(text, int.MaxValue, out minutes);

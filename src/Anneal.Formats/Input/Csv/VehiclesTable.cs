@@ -57,7 +57,7 @@ internal static class VehiclesTable
             for (int d = 0; d < family.Count; d++)
             {
                 var column = table.Header[family[d].Index];
-                double c = cells.Number(column, double.NaN, true, "the capacity in " + family[d].Name);
+                double c = cells.Number(column, double.NaN, Limits.Quantity, "the capacity in " + family[d].Name);
                 capacity[d] = double.IsNaN(c) ? 0 : c;
             }
 
@@ -82,7 +82,7 @@ internal static class VehiclesTable
                 Capacity = capacity,
                 ShiftStart = shiftStart,
                 ShiftEnd = shiftEnd,
-                MaxDuration = cells.Duration("max_duration", double.PositiveInfinity),
+                MaxDuration = cells.Duration("max_duration", double.PositiveInfinity, Limits.MaxDuration, "the longest route duration"),
                 FixedCost = Cost(cells, "fixed_cost", "the fixed cost of using the vehicle"),
                 CostPerDistance = Cost(cells, "cost_per_km", "the cost per km"),
                 CostPerHour = Cost(cells, "cost_per_hour", "the cost per hour"),
@@ -154,7 +154,7 @@ internal static class VehiclesTable
 
     private static double Cost(Cells cells, string column, string meaning)
     {
-        double v = cells.Number(column, 0, true, meaning);
+        double v = cells.Number(column, 0, Limits.Price, meaning);
         return double.IsNaN(v) ? 0 : v;
     }
 }

@@ -28,7 +28,7 @@ internal static class WindowText
             var parts = p.Split('-');
             if (parts.Length != 2 || !TimeText.TryParseTime(cells.Decimal(parts[0]), out double open) || !TimeText.TryParseTime(cells.Decimal(parts[1]), out double close))
             {
-                cells.Report(column, p, "not a valid window", Fix + "; times are HH:MM (HH 0-47, MM 00-59) or minutes");
+                cells.Report(column, p, "not a valid window", Fix + "; times are HH:MM (HH 0-47, MM 00-59) or minutes from 0 to 2880");
                 ok = false;
                 continue;
             }

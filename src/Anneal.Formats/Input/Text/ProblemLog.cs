@@ -20,6 +20,18 @@ internal sealed class ProblemLog(string file)
         }
     }
 
+    /// <summary>Reports a value outside <paramref name="range"/> (see <see cref="Limits"/>); false when it was reported.</summary>
+    public bool InRange(int? row, string column, string token, double value, NumberRange range, string meaning)
+    {
+        if (range.Contains(value))
+        {
+            return true;
+        }
+
+        Add(row, column, token, Limits.Problem(range), Limits.Fix(range, meaning));
+        return false;
+    }
+
     public void ThrowIfAny()
     {
         if (_problems.Count > 0)
