@@ -47,11 +47,16 @@ public static class RunFiles
     public static SummaryDocument Summary(LoadedInput input, Instance instance, PlanEvaluation plan, RunOutcome? outcome, RunFacts facts)
     {
         var solvers = new List<SolverSummary>();
+        double? lowerBound = null;
         foreach (var judged in outcome?.Results ?? [])
         {
             var r = judged.Result;
             var e = judged.Evaluation;
-            solvers.Add(new SolverSummary(r.Solver, e.Objective, e.Distance, e.VehiclesUsed, e.Feasible, r.SecondsToBest, r.Seconds, r.Status, r.LowerBound, r.Notes ?? []));
+            solvers.Add(new SolverSummary(r.Solver, e.Objective, e.Distance, e.VehiclesUsed, e.Feasible, r.SecondsToBest, r.Seconds, r.Status, r.LowerBound, r.Notes ?? [], r.BoundOnly));
+            if (r.LowerBound is { } b && double.IsFinite(b) && (lowerBound is null || b > lowerBound))
+            {
+                lowerBound = b;
+            }
         }
 
         return new SummaryDocument(
@@ -65,7 +70,8 @@ public static class RunFiles
             facts.TimeLimitSeconds,
             facts.Interrupted,
             Cautions.All,
-            facts.GeneratedAt);
+            facts.GeneratedAt,
+            lowerBound);
     }
 
     private static IEnumerable<TraceRow> Trace(RunOutcome outcome)

@@ -19,6 +19,8 @@ public sealed class ExactModel
     private readonly IReadOnlyList<VehicleClass> _classes;
     private readonly ILiteral?[][,] _arc;
     private readonly LinearExprBuilder _objective = LinearExpr.NewBuilder();
+    private readonly List<ILiteral> _starts = [];
+    private readonly bool _scheduleExact;
 
     public CpModel Model { get; } = new();
     public IntegerScale Scale { get; }
@@ -26,14 +28,23 @@ public sealed class ExactModel
     /// <summary>"approximated: ..." and similar facts about the mapping.</summary>
     public IReadOnlyList<string> Notes { get; }
 
-    public ExactModel(Instance instance)
+    /// <summary>
+    /// True when the integer model keeps exactly Anneal's plans (whole times and loads, no schedule approximation), so
+    /// that its proven bound, less the cost rounding, bounds Anneal's objective too.
+    /// </summary>
+    public bool SamePlans { get; }
+
+    /// <param name="hints">Proven facts about every plan (from the `bound` solver's code) that the model may assume.</param>
+    public ExactModel(Instance instance, ExactHints? hints = null)
     {
         _instance = instance;
-        Scale = ExactScale(instance);
+        (Scale, SamePlans) = ExactScale(instance);
         _classes = VehicleClass.Group(instance);
         int n = instance.StopCount;
         _arc = new ILiteral?[_classes.Count][,];
         var notes = new List<string>(ScheduleApproximations.For(instance));
+        _scheduleExact = notes.Count == 0;
+        SamePlans &= _scheduleExact;
         var time = new IntVar[n];
         var departure = new IntVar[n];
         var load = new IntVar[n, instance.DimensionCount];
@@ -85,9 +96,51 @@ public sealed class ExactModel
             }
         }
 
+        Assume(hints, notes);
         Model.Minimize(_objective);
         notes.AddRange(Scale.Notes);
         Notes = notes;
+    }
+
+    /// <summary>
+    /// At least the proven number of routes, and an objective no lower than the proven bound less what the integer
+    /// rounding of costs could take off it (half a step per term, and the rates' relative rounding), so that the
+    /// integer model's optimum is never cut off while CP-SAT's own bound starts from the proven one.
+    /// </summary>
+    private void Assume(ExactHints? hints, List<string> notes)
+    {
+        if (hints is null)
+        {
+            return;
+        }
+
+        if (hints.MinVehicles > 0)
+        {
+            Model.Add(LinearExpr.Sum(_starts) >= hints.MinVehicles);
+            notes.Add($"assumed at least {hints.MinVehicles} route(s), as the bound proves");
+        }
+
+        if (hints.ObjectiveAtLeast is { } lower && lower > 0 && _scheduleExact)
+        {
+            double terms = 0.5 * ((2 * _instance.StopCount) + (2 * _instance.Vehicles.Count) + 2);
+            double scaled = (lower * Scale.CostScale * (1 - (2 * Scale.MaxRateError) - 1e-9)) - terms;
+            if (scaled > 0)
+            {
+                Model.Add(_objective >= (long)Math.Floor(scaled));
+            }
+        }
+    }
+
+    /// <summary>A proven bound of the integer model as a bound of Anneal's objective: the cost rounding taken off, as in <see cref="Assume"/>; null unless <see cref="SamePlans"/>.</summary>
+    public double? AnnealBound(double integerBound)
+    {
+        if (!SamePlans)
+        {
+            return null;
+        }
+
+        double terms = 0.5 * ((2 * _instance.StopCount) + (2 * _instance.Vehicles.Count) + 2);
+        return Math.Max(0, (integerBound - terms) / Scale.CostScale * (1 - (2 * Scale.MaxRateError) - 1e-9));
     }
 
     /// <summary>The routes of a solution, given the value of each literal.</summary>
@@ -192,6 +245,7 @@ public sealed class ExactModel
                 if (a == 0)
                 {
                     starts.Add(x);
+                    _starts.Add(x);
                     _objective.AddTerm(x, Scale.Cost(fixedCost));
                     int j = b - 1;
                     if (durationMatters)
@@ -296,7 +350,7 @@ public sealed class ExactModel
     /// whole, else 100 steps; cost steps 1000 per time step, so a price per time unit keeps three digits.
     /// Integer data is then exact.
     /// </summary>
-    private static IntegerScale ExactScale(Instance instance)
+    private static (IntegerScale Scale, bool Exact) ExactScale(Instance instance)
     {
         bool wholeTimes = true, wholeLoads = true;
         foreach (var s in instance.Stops)
@@ -331,7 +385,7 @@ public sealed class ExactModel
         }
 
         double timeSteps = wholeTimes ? 1 : 100;
-        return new IntegerScale(instance, timeSteps, wholeLoads ? 1 : 100, maxCostScale: 1000 * timeSteps);
+        return (new IntegerScale(instance, timeSteps, wholeLoads ? 1 : 100, maxCostScale: 1000 * timeSteps), wholeTimes && wholeLoads);
     }
 
     private static bool Whole(double x) => double.IsInfinity(x) || Math.Abs(x - Math.Round(x)) < 1e-9;

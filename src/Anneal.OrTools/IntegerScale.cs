@@ -41,6 +41,9 @@ public sealed class IntegerScale
     /// <summary>Latest scaled time any schedule needs, soft lateness included.</summary>
     public long Horizon { get; }
 
+    /// <summary>Largest relative change rounding made to a cost rate so far (0 when every rate was whole).</summary>
+    public double MaxRateError { get; private set; }
+
     /// <summary>Rounding that changed a cost rate noticeably ("approximated: ...").</summary>
     public IReadOnlyList<string> Notes => _notes;
 
@@ -116,6 +119,11 @@ public sealed class IntegerScale
     private long Rate(double exact, string what)
     {
         long r = (long)Math.Round(exact);
+        if (exact > 0)
+        {
+            MaxRateError = Math.Max(MaxRateError, Math.Abs(r - exact) / exact);
+        }
+
         if (exact > 0 && Math.Abs(r - exact) > 1e-4 * exact)
         {
             string note = $"approximated: {what} rounded to {r} integer cost steps per step instead of {exact:G6}";

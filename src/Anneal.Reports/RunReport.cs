@@ -71,7 +71,7 @@ public static class RunReport
         foreach (var s in record.Solvers)
         {
             list.Add(new SolverRun(s.Solver, s.Objective, s.Feasible, s.Vehicles, s.Distance, s.Seconds, s.SecondsToBest, s.Status, s.LowerBound, s.Notes,
-                traces.TryGetValue(s.Solver, out var t) ? t : []));
+                traces.TryGetValue(s.Solver, out var t) ? t : [], s.BoundOnly));
         }
 
         return list;

@@ -121,9 +121,36 @@ public static class SolveCommand
 
         PrintSolvers(w, outcome);
         w.WriteLine($"Chosen: {best.Result.Solver}");
+        if (Proof(outcome) is { } proof)
+        {
+            w.WriteLine(proof);
+        }
+
         PlanReport.Print(w, instance, best.Evaluation);
         w.WriteLine($"Written: {folder}");
         return interrupted ? ExitCodes.Interrupted : best.Evaluation.Feasible ? ExitCodes.Success : ExitCodes.Infeasible;
+    }
+
+    /// <summary>How far the written plan can be from optimal, when a solver proved a bound and the plan keeps the hard rules.</summary>
+    private static string? Proof(RunOutcome outcome)
+    {
+        var best = outcome.Best.Evaluation;
+        double? bound = null;
+        string? by = null;
+        foreach (var judged in outcome.Results)
+        {
+            if (judged.Result.LowerBound is { } b && double.IsFinite(b) && (bound is null || b > bound))
+            {
+                (bound, by) = (b, judged.Result.Solver);
+            }
+        }
+
+        if (!best.Feasible || Anneal.Reports.Traces.TraceFacts.GapPercent(best.Objective, bound) is not { } gap)
+        {
+            return null;
+        }
+
+        return string.Create(CultureInfo.InvariantCulture, $"Lower bound {bound:0.00} ({by}): the plan is proved within {gap:0.0#}% of optimal.");
     }
 
     private static void PrintSolvers(TextWriter w, RunOutcome outcome)
@@ -133,8 +160,11 @@ public static class SolveCommand
         {
             var r = judged.Result;
             var e = judged.Evaluation;
-            w.WriteLine(string.Create(CultureInfo.InvariantCulture,
-                $"  {r.Solver,-12} objective {e.Objective,12:0.00}  vehicles {e.VehiclesUsed,3}  distance {e.Distance,10:0.00}  {(e.Feasible ? "feasible" : "infeasible"),-10}  best at {r.SecondsToBest:0.0} of {r.Seconds:0.0} s  {r.Status}"));
+            w.WriteLine(r.BoundOnly
+                ? string.Create(CultureInfo.InvariantCulture,
+                    $"  {r.Solver,-12} lower bound {(r.LowerBound is { } lb ? lb.ToString("0.00", CultureInfo.InvariantCulture) : "none"),10}  (no plan)  reached at {r.SecondsToBest:0.0} of {r.Seconds:0.0} s  {r.Status}")
+                : string.Create(CultureInfo.InvariantCulture,
+                    $"  {r.Solver,-12} objective {e.Objective,12:0.00}  vehicles {e.VehiclesUsed,3}  distance {e.Distance,10:0.00}  {(e.Feasible ? "feasible" : "infeasible"),-10}  best at {r.SecondsToBest:0.0} of {r.Seconds:0.0} s  {r.Status}"));
             foreach (var note in r.Notes ?? [])
             {
                 w.WriteLine("      note: " + note);

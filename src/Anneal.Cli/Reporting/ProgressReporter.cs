@@ -61,8 +61,10 @@ public sealed class ProgressReporter
             else if (!_lastLogged.TryGetValue(solver, out double last) || point.Seconds - last >= LogEverySeconds)
             {
                 _lastLogged[solver] = point.Seconds;
-                _writer.WriteLine(string.Create(CultureInfo.InvariantCulture,
-                    $"[{point.Seconds,7:0.0} s] {solver}: best {point.BestObjective:0.00} ({Feasibility(point)}), current {point.CurrentObjective:0.00}, iteration {point.Iteration}{State(point)}"));
+                _writer.WriteLine(BoundTrace.Is(point)
+                    ? string.Create(CultureInfo.InvariantCulture, $"[{point.Seconds,7:0.0} s] {solver}: {point.State} {point.BestObjective:0.00}")
+                    : string.Create(CultureInfo.InvariantCulture,
+                        $"[{point.Seconds,7:0.0} s] {solver}: best {point.BestObjective:0.00} ({Feasibility(point)}), current {point.CurrentObjective:0.00}, iteration {point.Iteration}{State(point)}"));
             }
         }
     }
@@ -102,7 +104,7 @@ public sealed class ProgressReporter
         {
             var p = _latest[name];
             lines.Add(string.Create(CultureInfo.InvariantCulture,
-                $"{Cut(name, 12),-12} {p.BestObjective,16:0.00} {(p.BestFeasible ? "yes" : "no"),-9} {Secs(elapsed),9} {left,9}"));
+                $"{Cut(name, 12),-12} {p.BestObjective,16:0.00} {(BoundTrace.Is(p) ? "bound" : p.BestFeasible ? "yes" : "no"),-9} {Secs(elapsed),9} {left,9}"));
         }
 
         return lines;

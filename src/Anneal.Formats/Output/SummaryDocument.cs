@@ -3,6 +3,7 @@ namespace Anneal.Formats.Output;
 // The shape of summary.json. Field names are the README's contract; serialised in camelCase.
 
 /// <summary>The whole summary.json.</summary>
+/// <param name="LowerBound">The strongest lower bound any solver proved on the objective of plans that keep the hard rules; null when none did.</param>
 public sealed record SummaryDocument(
     string Instance,
     string Format,
@@ -14,7 +15,8 @@ public sealed record SummaryDocument(
     double? TimeLimitSeconds,
     bool Interrupted,
     IReadOnlyList<string> Cautions,
-    DateTimeOffset GeneratedAt);
+    DateTimeOffset GeneratedAt,
+    double? LowerBound = null);
 
 /// <summary>The written plan as the evaluator judged it.</summary>
 public sealed record PlanSummary(
@@ -42,6 +44,7 @@ public sealed record BreakdownSummary(
 public sealed record ViolationSummary(string Rule, bool Hard, string? Vehicle, string? Stop, double Amount, string Message);
 
 /// <summary>One solver's run, judged by the evaluator (not by the solver's own numbers).</summary>
+/// <param name="BoundOnly">The solver proves a bound and offers no plan: its plan fields describe an empty plan, not a result.</param>
 public sealed record SolverSummary(
     string Solver,
     double Objective,
@@ -52,4 +55,5 @@ public sealed record SolverSummary(
     double Seconds,
     string Status,
     double? LowerBound,
-    IReadOnlyList<string> Notes);
+    IReadOnlyList<string> Notes,
+    bool BoundOnly = false);

@@ -70,6 +70,9 @@ public static class ReportPage
         Card(h, "distance", Num(plan.Distance, "0.0") + E(input.DistanceUnit), null);
         Card(h, "stops served", $"{input.Instance.StopCount - plan.Unserved.Count} of {input.Instance.StopCount}", plan.Unserved.Count > 0 ? "warn" : null);
         Card(h, "hard rules", hard == 0 ? "all kept" : $"{hard} broken", hard == 0 ? "ok" : "bad");
+        var bound = Plots.ConvergencePlot.Bound(input.Solvers);
+        double? gap = plan.Feasible && bound is { } b ? Traces.TraceFacts.GapPercent(plan.Objective, b.Value) : null;
+        Card(h, "optimality", gap is { } g ? (g < 0.005 ? "proved optimal" : $"proved within {Percent(g)} of optimal") : "gap to optimal unknown", gap is null ? "warn" : "ok");
         h.Append("</div>");
     }
 

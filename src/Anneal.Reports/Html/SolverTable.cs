@@ -8,6 +8,14 @@ namespace Anneal.Reports.Html;
 /// <summary>One row per solver: final objective, feasibility, how fast it got within 1% of its own final value, bound and gap.</summary>
 internal static class SolverTable
 {
+    /// <summary>A solver that only proves bounds has no plan: its row shows the bound and when it was reached.</summary>
+    private static void BoundRow(StringBuilder h, SolverRun s) =>
+        h.Append("<tr class=\"bound\"><td>").Append(E(s.Solver)).Append("</td><td class=\"n\">–</td><td>no plan</td><td class=\"n\">–</td><td class=\"n\">–</td><td class=\"n\">–</td>")
+            .Append("<td class=\"n\">").Append(Seconds(s.SecondsToBest)).Append("</td>")
+            .Append("<td class=\"n\">").Append(Seconds(s.Seconds)).Append("</td>")
+            .Append("<td class=\"n\">").Append(s.LowerBound is { } lb ? Money(lb) : "–").Append("</td><td class=\"n\">–</td>")
+            .Append("<td>").Append(E(s.Status)).Append("</td></tr>");
+
     public static void Write(StringBuilder h, ReportInput input)
     {
         if (input.Solvers.Count == 0)
@@ -22,6 +30,12 @@ internal static class SolverTable
             .Append("<th class=\"n\">lower bound</th><th class=\"n\">gap to bound</th><th>status</th></tr></thead><tbody>");
         foreach (var s in input.Solvers)
         {
+            if (s.BoundOnly)
+            {
+                BoundRow(h, s);
+                continue;
+            }
+
             double? within = TraceFacts.SecondsToWithin(s.Trace, s.Objective, s.Feasible, Advice.Within);
             double? gap = bound is { } b ? TraceFacts.GapPercent(s.Objective, b.Value) : null;
             bool chosen = s.Solver == input.Run.Chosen;
@@ -40,6 +54,7 @@ internal static class SolverTable
         }
 
         h.Append("</tbody></table>");
+
         foreach (var s in input.Solvers)
         {
             foreach (var note in s.Notes)

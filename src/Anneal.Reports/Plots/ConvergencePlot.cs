@@ -7,7 +7,8 @@ namespace Anneal.Reports.Plots;
 /// <summary>
 /// Best objective against elapsed seconds (log axis), one line per solver: dotted while the best plan still breaks a
 /// hard rule, solid once feasible, a ring where it first became feasible; the strongest proven lower bound as a
-/// dashed line and a note of the gap between the best plan and that bound.
+/// dashed line (a solver that only proves bounds draws its bound rising over time) and a note of the gap between the
+/// best plan and that bound.
 /// </summary>
 public static class ConvergencePlot
 {
@@ -31,6 +32,17 @@ public static class ConvergencePlot
             var (xs, ys, feasibleFrom) = Steps(s);
             if (xs.Length == 0)
             {
+                continue;
+            }
+
+            if (s.BoundOnly)
+            {
+                var rising = plot.Add.ScatterLine(xs, ys, Palette.Bound);
+                rising.LinePattern = LinePattern.Dashed;
+                rising.LineWidth = 1.5f;
+                rising.ConnectStyle = ConnectStyle.StepHorizontal;
+                rising.LegendText = $"lower bound ({s.Solver})";
+                lo = Math.Min(lo, ys[^1]);
                 continue;
             }
 
@@ -62,7 +74,7 @@ public static class ConvergencePlot
         }
 
         var bound = Bound(solvers);
-        if (bound is { } b)
+        if (bound is { } b && !BoundOnly(solvers, b.Solver))
         {
             var line = plot.Add.HorizontalLine(b.Value, 1.5f, Palette.Bound, LinePattern.Dashed);
             line.LegendText = $"lower bound ({b.Solver})";
@@ -117,6 +129,19 @@ public static class ConvergencePlot
         return (xs.ToArray(), ys.ToArray(), feasibleFrom < 0 ? xs.Count : feasibleFrom);
     }
 
+    private static bool BoundOnly(IReadOnlyList<SolverRun> solvers, string name)
+    {
+        foreach (var s in solvers)
+        {
+            if (s.Solver == name)
+            {
+                return s.BoundOnly;
+            }
+        }
+
+        return false;
+    }
+
     /// <summary>The strongest (highest) lower bound any solver proved.</summary>
     public static (string Solver, double Value)? Bound(IReadOnlyList<SolverRun> solvers)
     {
@@ -137,6 +162,11 @@ public static class ConvergencePlot
         SolverRun? best = null;
         foreach (var s in solvers)
         {
+            if (s.BoundOnly)
+            {
+                continue;
+            }
+
             if (best is null || (s.Feasible && !best.Feasible) || (s.Feasible == best.Feasible && s.Objective < best.Objective))
             {
                 best = s;

@@ -4,6 +4,7 @@ namespace Anneal.Reports.Traces;
 
 /// <summary>One solver's part in a run, as the pictures and the report need it: the judged result and its convergence.</summary>
 /// <param name="Objective">The evaluator's objective of the solver's final plan.</param>
+/// <param name="BoundOnly">The solver proves a bound and offers no plan; its trace is the bound rising.</param>
 public sealed record SolverRun(
     string Solver,
     double Objective,
@@ -15,4 +16,5 @@ public sealed record SolverRun(
     string Status,
     double? LowerBound,
     IReadOnlyList<string> Notes,
-    IReadOnlyList<TracePoint> Trace);
+    IReadOnlyList<TracePoint> Trace,
+    bool BoundOnly = false);

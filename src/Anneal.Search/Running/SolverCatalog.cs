@@ -27,9 +27,9 @@ public static class SolverCatalog
     public static IReadOnlyList<string> Defaults(Instance instance)
     {
         var list = new List<string>();
-        foreach (var name in new[] { "sa", "tabu", "ortools", "exact" })
+        foreach (var name in new[] { "sa", "tabu", "ortools", "exact", "bound" })
         {
-            if (Factories.ContainsKey(name) && (name != "exact" || instance.StopCount <= 30))
+            if (Factories.ContainsKey(name) && (name != "exact" || instance.StopCount <= 30) && (name != "bound" || instance.StopCount > 0))
             {
                 list.Add(name);
             }

@@ -33,7 +33,7 @@ public sealed class ExactModelTests
         Assert.True(Math.Abs(judged.Objective - truth.Value.Objective) <= tolerance,
             $"seed {seed} ({instance.Objective}): exact {judged.Objective}, enumeration {truth.Value.Objective}");
         Assert.NotNull(result.LowerBound);
-        Assert.True(Math.Abs(result.LowerBound!.Value - truth.Value.Objective) <= tolerance);
+        Assert.True(Math.Abs(result.LowerBound!.Value - truth.Value.Objective) <= tolerance, $"bound {result.LowerBound} vs {truth.Value.Objective}");
     }
 
     [Fact]

@@ -1,0 +1,71 @@
+using System.Diagnostics;
+using System.Globalization;
+using Anneal.Bounds.Relaxation;
+using Anneal.Core.Model;
+using Anneal.Core.Plans;
+using Anneal.Search.Running;
+using Anneal.Search.Strategy;
+
+namespace Anneal.OrTools.Bounds;
+
+/// <summary>
+/// `bound`: proves a lower bound on the objective of every plan that keeps the hard rules, and offers no plan. It
+/// raises the bound in stages within the budget, each valid on its own, so an interrupted run still reports the
+/// strongest bound finished so far: the fewest vehicles and their fixed costs with each stop's cheapest arcs
+/// (<see cref="ArcShareBound"/>), then LP relaxations. What the relaxation gives up is in
+/// <see cref="RelaxedInstance"/>; the result's notes say it for the instance at hand.
+/// </summary>
+public sealed class BoundSolver : ISolver
+{
+    public string Name => "bound";
+
+    /// <summary>
+    /// The proven facts the exact model may assume, from the bound's stages run for at most <paramref name="budget"/>:
+    /// null when the instance admits no bound.
+    /// </summary>
+    public static ExactHints? Hints(Instance instance, TimeSpan budget, CancellationToken cancel)
+    {
+        var relaxed = RelaxedInstance.Build(instance);
+        if (relaxed.Declined is not null)
+        {
+            return null;
+        }
+
+        using var stop = CancellationTokenSource.CreateLinkedTokenSource(cancel);
+        stop.CancelAfter(budget);
+        var keeper = new BoundKeeper(new TraceRecorder(null, budget.TotalSeconds), Stopwatch.StartNew());
+        var vehicles = BoundStages.Run(relaxed, keeper, [], stop.Token);
+        return new ExactHints(vehicles.Vehicles, keeper.Best);
+    }
+
+    public SolverResult Solve(Instance instance, SolveOptions options, IProgress<TracePoint>? progress, CancellationToken cancel)
+    {
+        var clock = Stopwatch.StartNew();
+        var trace = new TraceRecorder(progress, options.TimeLimit.TotalSeconds);
+        var keeper = new BoundKeeper(trace, clock);
+        var relaxed = RelaxedInstance.Build(instance);
+        var notes = new List<string>();
+        if (relaxed.Declined is { } why)
+        {
+            return new SolverResult(Name, Plan.Empty, clock.Elapsed.TotalSeconds, 0, [], "no bound: " + why, null, notes, BoundOnly: true);
+        }
+
+        using var stop = CancellationTokenSource.CreateLinkedTokenSource(cancel);
+        stop.CancelAfter(options.TimeLimit);
+        BoundStages.Run(relaxed, keeper, notes, stop.Token);
+
+        if (relaxed.Relaxed.Count > 0)
+        {
+            notes.Add("relaxed for the bound: " + string.Join("; ", relaxed.Relaxed));
+        }
+
+        string status = cancel.IsCancellationRequested ? "interrupted" : stop.IsCancellationRequested ? "time limit" : "completed";
+        if (keeper.Best is { } best)
+        {
+            notes.Add(string.Create(CultureInfo.InvariantCulture, $"lower bound {best:0.###} from {keeper.Source}"));
+            trace.Finish(keeper.Point(keeper.Source!));
+        }
+
+        return new SolverResult(Name, Plan.Empty, clock.Elapsed.TotalSeconds, trace.SecondsToBest, trace.Points, status, keeper.Best, notes, BoundOnly: true);
+    }
+}
