@@ -1,6 +1,7 @@
 using System.CommandLine;
 using Anneal.Cli.Commands;
 using Anneal.Cli.Reporting;
+using Anneal.Core.Solving;
 using Anneal.Formats.Input;
 using Anneal.Formats.Output;
 
@@ -43,6 +44,11 @@ public static class CliApp
             ProblemPrinter.Print(context.Err, e.Problems);
             return ExitCodes.InvalidInput;
         }
+        catch (UnknownSolverException e)
+        {
+            context.Err.WriteLine("anneal: " + e.Message);
+            return ExitCodes.InvalidInput;
+        }
         catch (OutputException e)
         {
             context.Err.WriteLine("anneal: " + e.Message);
@@ -62,7 +68,6 @@ public static class CliApp
 
     public static RootCommand BuildRoot(CliContext context)
     {
-        OrTools.OrToolsSolvers.Register();
         var root = new RootCommand("Anneal plans delivery routes under hard and soft rules (vehicle routing with capacities and time windows).");
         root.Subcommands.Add(CheckCommand.Create(context));
         root.Subcommands.Add(EvaluateCommand.Create(context));

@@ -16,4 +16,7 @@ public sealed record CliContext(TextWriter Out, TextWriter Err)
     public string WorkingDirectory { get; init; } = Environment.CurrentDirectory;
 
     public Func<DateTime> Now { get; init; } = () => DateTime.Now;
+
+    /// <summary>The solver catalogue, job runner and run writers (<see cref="CliServices"/>); built once, read-only.</summary>
+    public IServiceProvider Services { get; init; } = CliServices.Shared;
 }

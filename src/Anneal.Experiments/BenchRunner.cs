@@ -1,9 +1,9 @@
 using System.Globalization;
-using Anneal.Core.Evaluation;
 using Anneal.Core.Model;
+using Anneal.Core.Solving;
 using Anneal.Formats.Input;
 using Anneal.Formats.Output;
-using Anneal.Search.Running;
+using Anneal.Jobs;
 
 namespace Anneal.Experiments;
 
@@ -32,7 +32,7 @@ public static class BenchRunner
                 {
                     foreach (var solver in settings.Solvers)
                     {
-                        plan.Add(new PlannedRun(instance, solver, settings.FirstSeed + s, budget));
+                        plan.Add(new PlannedRun(input, instance, solver, settings.FirstSeed + s, budget));
                     }
                 }
             }
@@ -41,7 +41,9 @@ public static class BenchRunner
         return plan;
     }
 
+    /// <param name="runner">The job runner every run goes through, as `solve` and the worker do.</param>
     public static BenchOutcome Run(
+        JobRunner runner,
         IReadOnlyList<LoadedInput> inputs,
         BenchSettings settings,
         ReferenceValues references,
@@ -74,7 +76,7 @@ public static class BenchRunner
 
                 try
                 {
-                    var row = RunOne(work[k], settings, references, outDir, progress, stop.Token);
+                    var row = RunOne(runner, work[k], settings, references, outDir, progress, stop.Token);
                     lock (gate)
                     {
                         if (row is null)
@@ -115,19 +117,25 @@ public static class BenchRunner
     }
 
     /// <summary>One run; null when it was cancelled before it ended by itself (its result is not a finished run).</summary>
-    private static BenchRow? RunOne(PlannedRun run, BenchSettings settings, ReferenceValues references, string outDir, Action<string, TracePoint>? progress, CancellationToken cancel)
+    private static BenchRow? RunOne(JobRunner runner, PlannedRun run, BenchSettings settings, ReferenceValues references, string outDir, Action<string, TracePoint>? progress, CancellationToken cancel)
     {
         var instance = run.Instance;
-        var solver = SolverCatalog.Create(run.Solver);
-        var options = new SolveOptions { TimeLimit = TimeSpan.FromSeconds(run.BudgetSeconds), IterationLimit = settings.Iterations, Seed = run.Seed, Threads = 1 };
-        IProgress<TracePoint>? sink = progress is null ? null : new Relay(p => progress($"{instance.Name}/{run.Solver}/{run.Seed}", p));
-        var result = solver.Solve(instance, options, sink, cancel);
+        var request = new JobRequest
+        {
+            Solvers = run.Solver,
+            TimeSeconds = run.BudgetSeconds,
+            Iterations = settings.Iterations,
+            Objective = instance.Objective,
+            Seed = run.Seed,
+        };
+        Action<string, TracePoint>? relay = progress is null ? null : (_, p) => progress($"{instance.Name}/{run.Solver}/{run.Seed}", p);
+        var judged = runner.Run(run.Input, request, relay, cancel).Outcome.Results[0];
         if (cancel.IsCancellationRequested)
         {
             return null;
         }
 
-        var evaluation = PlanEvaluator.Evaluate(instance, result.Plan);
+        var (result, evaluation) = (judged.Result, judged.Evaluation);
         var reference = references.Find(instance);
         double? gap = reference is null || evaluation.Routes.Count == 0 ? null : (evaluation.Distance / reference.Value - 1) * 100;
         if (instance.Objective == Objective.Cost && reference is not null)
@@ -138,7 +146,7 @@ public static class BenchRunner
         string traceName = string.Create(CultureInfo.InvariantCulture,
             $"{Safe(instance.Name)}-{Safe(run.Solver)}-s{run.Seed}-{RunKey.BudgetText(run.BudgetSeconds)}s-{run.Objective}.csv");
         TraceCsvWriter.Write(Path.Combine(outDir, TraceFolder, traceName),
-            result.Trace.Select(p => new TraceRow(run.Solver, p.Seconds, p.Iteration, p.BestObjective, p.CurrentObjective, p.BestFeasible, p.State)));
+            TraceCsvWriter.Rows(run.Solver, result.Trace));
         return new BenchRow(instance.Name, run.Solver, run.Seed, run.BudgetSeconds, run.Objective, evaluation.Objective,
             evaluation.VehiclesUsed, evaluation.Distance, evaluation.Feasible, result.SecondsToBest, result.Seconds,
             reference?.Value, reference?.Vehicles, gap, Path.Combine(TraceFolder, traceName));
@@ -156,10 +164,5 @@ public static class BenchRunner
         }
 
         return new string(chars);
-    }
-
-    private sealed class Relay(Action<TracePoint> report) : IProgress<TracePoint>
-    {
-        public void Report(TracePoint value) => report(value);
     }
 }

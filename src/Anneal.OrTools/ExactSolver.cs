@@ -3,8 +3,7 @@ using System.Globalization;
 using Anneal.Core.Evaluation;
 using Anneal.Core.Model;
 using Anneal.Core.Plans;
-using Anneal.Search.Running;
-using Anneal.Search.Strategy;
+using Anneal.Core.Solving;
 using Google.OrTools.Sat;
 
 namespace Anneal.OrTools;
@@ -24,12 +23,15 @@ public sealed class ExactSolver : ISolver
 
     public string Name => "exact";
 
+    public string? Declines(Instance instance) =>
+        instance.StopCount > _settings.StopLimit ? $"{instance.StopCount} stops, above the exact model's limit of {_settings.StopLimit}" : null;
+
     public SolverResult Solve(Instance instance, SolveOptions options, IProgress<TracePoint>? progress, CancellationToken cancel)
     {
         var clock = Stopwatch.StartNew();
-        if (instance.StopCount > _settings.StopLimit)
+        if (Declines(instance) is { } reason)
         {
-            return new SolverResult(Name, Plan.Empty, 0, 0, [], $"not applicable: {instance.StopCount} stops > {_settings.StopLimit}") { HasPlan = false };
+            return SolverResult.Declined(Name, reason);
         }
 
         // The bound's vehicle count and objective bound go into the model, so that CP-SAT's proof starts from them.
@@ -55,16 +57,16 @@ public sealed class ExactSolver : ISolver
 
         var notes = new List<string>(exact.Notes);
         double? lowerBound = null;
-        string result;
+        SolverStatus result;
         switch (status)
         {
             case CpSolverStatus.Optimal:
-                result = "optimal";
+                result = SolverStatus.Optimal;
                 lowerBound = Proven(exact, solver.BestObjectiveBound, hints);
                 notes.Add(string.Create(CultureInfo.InvariantCulture, $"proven optimal for the integer model ({exact.Scale.TimeScale} steps per time unit, {exact.Scale.CostScale} per cost unit)"));
                 break;
             case CpSolverStatus.Feasible:
-                result = cancel.IsCancellationRequested ? "interrupted" : "time limit";
+                result = cancel.IsCancellationRequested ? SolverStatus.Interrupted : SolverStatus.TimeLimit;
                 lowerBound = Proven(exact, solver.BestObjectiveBound, hints);
                 double objective = keeper.Best?.Objective ?? exact.Scale.ToObjective(solver.ObjectiveValue);
                 notes.Add(lowerBound is { } lb
@@ -72,23 +74,24 @@ public sealed class ExactSolver : ISolver
                     : "not proven optimal, and no lower bound proved");
                 break;
             case CpSolverStatus.Infeasible:
-                result = "no solution (infeasible)";
+                result = SolverStatus.NoSolution;
                 notes = ["CP-SAT proved that its integer model has no plan that keeps every hard rule"];
                 break;
             default:
-                result = cancel.IsCancellationRequested ? "interrupted" : $"no solution ({status.ToString().ToLowerInvariant()})";
+                result = cancel.IsCancellationRequested ? SolverStatus.Interrupted : SolverStatus.NoSolution;
                 break;
         }
 
         if (keeper.Best is null && status != CpSolverStatus.Infeasible)
         {
             notes.Clear(); // what the model approximates only matters for a plan, and there is none
+            notes.Add($"CP-SAT status: {status.ToString().ToLowerInvariant()}");
         }
 
         double total = clock.Elapsed.TotalSeconds;
         if (keeper.Best is { } best)
         {
-            trace.Finish(new TracePoint(total, keeper.Solutions, best.Objective, best.Objective, best.Feasible, result));
+            trace.Finish(new TracePoint(total, keeper.Solutions, best.Objective, best.Objective, best.Feasible, result.ToText()));
         }
 
         return new SolverResult(Name, keeper.BestPlan, total, trace.SecondsToBest, trace.Points, result, lowerBound, notes) { HasPlan = keeper.Best is not null };

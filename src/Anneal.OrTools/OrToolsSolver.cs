@@ -2,8 +2,7 @@ using System.Diagnostics;
 using Anneal.Core.Evaluation;
 using Anneal.Core.Model;
 using Anneal.Core.Plans;
-using Anneal.Search.Running;
-using Anneal.Search.Strategy;
+using Anneal.Core.Solving;
 using Google.OrTools.ConstraintSolver;
 using Google.Protobuf.WellKnownTypes;
 
@@ -24,6 +23,8 @@ public sealed class OrToolsSolver : ISolver
 
     public string Name => "ortools";
 
+    public string? Declines(Instance instance) => null;
+
     public SolverResult Solve(Instance instance, SolveOptions options, IProgress<TracePoint>? progress, CancellationToken cancel) =>
         Run(instance, options, progress, cancel).Result;
 
@@ -37,6 +38,7 @@ public sealed class OrToolsSolver : ISolver
         Plan bestPlan = Plan.Empty;
         double? engineObjective = null;
         long solutions = 0;
+        bool targetReached = false;
         string phase = "first solution";
 
         void Offer(Plan plan, long engineCost)
@@ -59,6 +61,7 @@ public sealed class OrToolsSolver : ISolver
             phase = _settings.Metaheuristic.ToString();
             if (options.TargetObjective is double target && best is { Feasible: true } && best.Objective <= target)
             {
+                targetReached = true;
                 model.solver().FinishCurrentSearch();
             }
         };
@@ -98,9 +101,16 @@ public sealed class OrToolsSolver : ISolver
         }
 
         double seconds = clock.Elapsed.TotalSeconds;
-        string status = best is null
-            ? $"no solution ({routingStatus})"
-            : cancel.IsCancellationRequested ? "interrupted" : "completed";
+        var status = best is null ? SolverStatus.NoSolution
+            : cancel.IsCancellationRequested ? SolverStatus.Interrupted
+            : targetReached ? SolverStatus.TargetReached
+            : options.IterationLimit is long limit && solutions >= limit ? SolverStatus.IterationLimit
+            : seconds >= options.TimeLimit.TotalSeconds * 0.99 ? SolverStatus.TimeLimit
+            : SolverStatus.Completed;
+        if (best is null)
+        {
+            notes.Add($"routing status: {routingStatus}");
+        }
         if (best is not null)
         {
             trace.Finish(new TracePoint(seconds, solutions, best.Objective, best.Objective, best.Feasible, "end"));

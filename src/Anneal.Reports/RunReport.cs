@@ -2,9 +2,9 @@ using Anneal.Core.Evaluation;
 using Anneal.Core.Model;
 using Anneal.Reports.Html;
 using Anneal.Reports.Plots;
-using Anneal.Reports.Runs;
+using Anneal.Formats.Output.Runs;
 using Anneal.Reports.Traces;
-using Anneal.Search.Running;
+using Anneal.Core.Solving;
 
 namespace Anneal.Reports;
 

@@ -1,13 +1,14 @@
 using Anneal.Formats.Input;
 using Anneal.Formats.Output;
 using Anneal.Jobs;
-using Anneal.Search.Running;
+using Anneal.Core.Solving;
 using Microsoft.Extensions.Logging;
 
 namespace Anneal.Worker;
 
 /// <summary>Solves one claimed job and leaves it in exactly one place: the outbox, failed/, or back in the inbox.</summary>
-public sealed class JobProcessor(WorkerOptions options, WorkerFolders folders, string workerId, JobClaimer claimer, ILogger log, TimeProvider clock)
+public sealed class JobProcessor(
+    WorkerOptions options, WorkerFolders folders, string workerId, JobClaimer claimer, JobRunner runner, RunWriter writer, ILogger log, TimeProvider clock)
 {
     public (JobResult Result, string Where) Process(ClaimedJob job, JobProgress progress, CancellationToken stop)
     {
@@ -40,14 +41,19 @@ public sealed class JobProcessor(WorkerOptions options, WorkerFolders folders, s
     private (JobResult, string) Solve(ClaimedJob job, JobProgress progress, CancellationToken stop)
     {
         var input = InputLoader.Load(JobInput.Locate(job));
-        var objective = input.Settings.Objective ?? input.Instance.Objective;
-        var instance = objective == input.Instance.Objective ? input.Instance : input.Instance.With(objective: objective);
-        string? chosen = string.IsNullOrWhiteSpace(options.Solvers) ? null : options.Solvers;
-        var names = SolverChoice.Resolve(chosen, input.Settings.Solvers, instance, out string? unknown);
-        if (names is null)
+        JobPlan plan;
+        try
         {
-            throw new InputException(new InputProblem("settings.json", null, "solvers", unknown, "no such solver",
-                $"use one of: {string.Join(", ", SolverCatalog.Names.Order(StringComparer.Ordinal))}"));
+            plan = runner.Prepare(input, new JobRequest
+            {
+                Solvers = string.IsNullOrWhiteSpace(options.Solvers) ? null : options.Solvers,
+                DefaultTimeSeconds = options.TimeSeconds,
+                Threads = options.ThreadsPerJob,
+            });
+        }
+        catch (UnknownSolverException e)
+        {
+            throw new InputException(new InputProblem("settings.json", null, "solvers", e.Name, e.Message, "name only known solvers in \"solvers\""));
         }
 
         if (stop.IsCancellationRequested)
@@ -55,19 +61,16 @@ public sealed class JobProcessor(WorkerOptions options, WorkerFolders folders, s
             return (JobResult.Requeued, claimer.Return(job.Path, job.Entry));
         }
 
-        double seconds = input.Settings.TimeSeconds ?? options.TimeSeconds;
-        int seed = input.Settings.Seed ?? 1;
         log.LogInformation("Job {JobId} started (attempt {Attempt}): {Stops} stops, solvers {Solvers}, up to {Budget:0.#} s",
-            job.Id, job.Attempt, instance.StopCount, string.Join(",", names), seconds);
-        var solveOptions = new SolveOptions { TimeLimit = TimeSpan.FromSeconds(seconds), Seed = seed, Threads = options.ThreadsPerJob };
-        var outcome = RunCoordinator.Run(instance, names, solveOptions, progress.Report, stop);
-        bool interrupted = stop.IsCancellationRequested;
+            job.Id, job.Attempt, plan.Instance.StopCount, string.Join(",", plan.SolverNames), plan.Seconds);
+        var run = runner.Run(plan, progress.Report, stop);
+        bool interrupted = run.Interrupted;
         bool requeue = interrupted && options.OnShutdown == ShutdownChoice.Requeue;
 
         string partial = Publisher.NewPartial(folders.Outbox, workerId, job.Id);
         var now = clock.GetUtcNow();
-        var best = outcome.Best;
-        RunFiles.Write(partial, input, instance, best.Evaluation, outcome, new RunFiles.RunFacts(seed, seconds, interrupted, now));
+        var best = run.Outcome.Best;
+        writer.Write(partial, run, now);
         new JobRecord(job.Id, job.Entry.Name, workerId, job.Attempt, job.ClaimedAt, now, interrupted, Final: !requeue).Write(partial);
         string published = Publisher.Publish(partial, folders.Outbox, job.Id, workerId);
 

@@ -18,7 +18,8 @@ public static class WorkerHost
     public const string EnvironmentPrefix = "ANNEAL_";
 
     /// <param name="commandLine">Settings given on the command line, as configuration keys (e.g. "Worker:Inbox").</param>
-    public static IHost Build(IReadOnlyDictionary<string, string?> commandLine, WorkerRun run)
+    /// <param name="addAnneal">Registers the solvers and run writers, as the host wants them (<c>s => s.AddAnneal().AddOrTools()</c>).</param>
+    public static IHost Build(IReadOnlyDictionary<string, string?> commandLine, WorkerRun run, Action<IServiceCollection> addAnneal)
     {
         var builder = Host.CreateEmptyApplicationBuilder(new HostApplicationBuilderSettings { ContentRootPath = Environment.CurrentDirectory });
         builder.Configuration
@@ -40,6 +41,7 @@ public static class WorkerHost
         builder.Services.Configure<ConsoleLoggerOptions>(o => o.LogToStandardErrorThreshold = LogLevel.Trace);
 
         var services = builder.Services;
+        addAnneal(services);
         services.AddSingleton(run);
         services.AddSingleton(TimeProvider.System);
         services.AddSingleton<IValidateOptions<WorkerOptions>, WorkerOptionsValidator>();

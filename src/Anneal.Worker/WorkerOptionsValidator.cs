@@ -1,10 +1,10 @@
-using Anneal.Search.Running;
+using Anneal.Core.Solving;
 using Microsoft.Extensions.Options;
 
 namespace Anneal.Worker;
 
 /// <summary>Refuses settings that would only fail later, at start-up, with every problem named at once.</summary>
-public sealed class WorkerOptionsValidator : IValidateOptions<WorkerOptions>
+public sealed class WorkerOptionsValidator(SolverCatalog catalog) : IValidateOptions<WorkerOptions>
 {
     public ValidateOptionsResult Validate(string? name, WorkerOptions options)
     {
@@ -31,19 +31,16 @@ public sealed class WorkerOptionsValidator : IValidateOptions<WorkerOptions>
             problems.Add($"Worker:SettleSeconds must be 0 or more seconds, not {options.SettleSeconds}");
         }
 
-        foreach (var solver in SolverNames(options.Solvers))
+        foreach (var solver in SolverCatalog.Split(options.Solvers ?? string.Empty))
         {
-            if (!SolverCatalog.Exists(solver))
+            if (!catalog.Exists(solver))
             {
-                problems.Add($"Worker:Solvers names an unknown solver '{solver}'; known solvers: {string.Join(", ", SolverCatalog.Names.Order(StringComparer.Ordinal))}");
+                problems.Add("Worker:Solvers: " + catalog.Unknown(solver).Message);
             }
         }
 
         return problems.Count == 0 ? ValidateOptionsResult.Success : ValidateOptionsResult.Fail(problems);
     }
-
-    public static string[] SolverNames(string? list) =>
-        list?.Split(',', StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries) ?? [];
 
     private static void Folder(List<string> problems, string? path, string key, string? flag, bool required)
     {

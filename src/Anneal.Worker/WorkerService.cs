@@ -1,4 +1,5 @@
 using Anneal.Formats.Output;
+using Anneal.Jobs;
 using Microsoft.Extensions.Hosting;
 using Microsoft.Extensions.Logging;
 using Microsoft.Extensions.Options;
@@ -10,7 +11,8 @@ namespace Anneal.Worker;
 /// and on a stop request let every running job write its best plan before returning. The stopping token is the only
 /// stop signal and reaches every solver.
 /// </summary>
-public sealed class WorkerService(IOptions<WorkerOptions> options, WorkerRun run, IHostApplicationLifetime lifetime, ILoggerFactory logs, TimeProvider clock)
+public sealed class WorkerService(
+    IOptions<WorkerOptions> options, WorkerRun run, JobRunner runner, RunWriter writer, IHostApplicationLifetime lifetime, ILoggerFactory logs, TimeProvider clock)
     : BackgroundService
 {
     private readonly ILogger _log = logs.CreateLogger("Anneal.Worker");
@@ -48,7 +50,7 @@ public sealed class WorkerService(IOptions<WorkerOptions> options, WorkerRun run
     {
         var claimer = new JobClaimer(folders, me.Folder, TimeSpan.FromSeconds(o.SettleSeconds), clock);
         var recovery = new DeadWorkerRecovery(folders, me.Id, claimer, o.MaxRetries, _log, clock);
-        var processor = new JobProcessor(o, folders, me.Id, claimer, _log, clock);
+        var processor = new JobProcessor(o, folders, me.Id, claimer, runner, writer, _log, clock);
         var status = new StatusFile(StatusFile.PathFor(folders.Working, me.Id), me.Id, clock.GetUtcNow());
         _log.LogInformation("Worker {WorkerId} watching {Inbox}; results to {Outbox}, failures to {Failed}; up to {Jobs} job(s) at a time, {Seconds:0.#} s each unless a job says otherwise{Once}",
             me.Id, folders.Inbox, folders.Outbox, folders.Failed, o.ConcurrentJobs, o.TimeSeconds, run.Once ? "; stops when the inbox is empty" : string.Empty);

@@ -5,8 +5,9 @@ using Anneal.Core.Model;
 using Anneal.Experiments;
 using Anneal.Experiments.Summary;
 using Anneal.Formats.Input;
+using Anneal.Jobs;
 using Anneal.Search.Diagnostics;
-using Anneal.Search.Running;
+using Microsoft.Extensions.DependencyInjection;
 
 namespace Anneal.Cli.Commands;
 
@@ -44,12 +45,7 @@ public static class BenchCommand
             var names = Given(solvers) || file.Solvers is null
                 ? parse.GetValue(solvers)!.Split(',', StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries)
                 : file.Solvers.ToArray();
-            var unknown = names.FirstOrDefault(n => !SolverCatalog.Exists(n));
-            if (unknown is not null || names.Length == 0)
-            {
-                context.Err.WriteLine($"anneal: unknown solver '{unknown}'; known solvers: {string.Join(", ", SolverCatalog.Names.Order(StringComparer.Ordinal))}");
-                return ExitCodes.InvalidInput;
-            }
+            var known = context.Services.GetRequiredService<JobRunner>().Catalog.Known(names);
 
             var budgets = Given(time) || file.Budgets is null ? ParseBudgets(parse.GetValue(time)!) : file.Budgets;
             int seedCount = Given(seeds) ? parse.GetValue(seeds) : file.Seeds ?? parse.GetValue(seeds);
@@ -82,7 +78,7 @@ public static class BenchCommand
 
             var settings = new BenchSettings
             {
-                Solvers = names,
+                Solvers = known,
                 Seeds = seedCount,
                 FirstSeed = file.FirstSeed ?? 1,
                 Budgets = budgets.Distinct().ToList(),
@@ -136,7 +132,7 @@ public static class BenchCommand
             w.WriteLine(Header);
         }
 
-        var outcome = BenchRunner.Run(inputs, settings, refs, folder, row =>
+        var outcome = BenchRunner.Run(context.Services.GetRequiredService<JobRunner>(), inputs, settings, refs, folder, row =>
         {
             lines.Add(Format(row));
             if (!quiet)

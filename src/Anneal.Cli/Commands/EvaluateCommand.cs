@@ -4,6 +4,8 @@ using Anneal.Jobs;
 using Anneal.Core.Evaluation;
 using Anneal.Core.Plans;
 using Anneal.Formats.Input;
+using Anneal.Formats.Output.Artifacts;
+using Microsoft.Extensions.DependencyInjection;
 
 namespace Anneal.Cli.Commands;
 
@@ -58,7 +60,7 @@ public static class EvaluateCommand
         if (outDir is not null)
         {
             string folder = OutputFolder.Create(outDir);
-            RunFiles.Write(folder, input, instance, evaluation, null, new RunFiles.RunFacts(null, null, false, context.Now().ToUniversalTime()));
+            context.Services.GetRequiredService<RunWriter>().Write(folder, input, instance, evaluation, null, new RunFacts(null, null, false, context.Now().ToUniversalTime()));
             context.Out.WriteLine($"Written: {folder}");
         }
 

@@ -3,7 +3,7 @@ using Anneal.Core.Evaluation;
 using Anneal.Core.Model;
 using Anneal.Formats.Input;
 using Anneal.Reports;
-using Anneal.Reports.Runs;
+using Anneal.Formats.Output.Runs;
 
 namespace Anneal.Cli.Commands;
 

@@ -3,7 +3,8 @@ using System.Globalization;
 using Anneal.Cli.Reporting;
 using Anneal.Formats.Input;
 using Anneal.Jobs;
-using Anneal.Search.Running;
+using Microsoft.Extensions.DependencyInjection;
+using Anneal.Core.Solving;
 
 namespace Anneal.Cli.Commands;
 
@@ -75,60 +76,52 @@ public static class SolveCommand
 
     public static int Execute(LoadedInput input, SolveRequest request, CliContext context)
     {
-        var instance = SharedOptions.WithObjective(input, request.Objective);
-        var names = SolverChoice.Resolve(request.Solvers, input.Settings.Solvers, instance, out string? unknown);
-        if (names is null)
+        var runner = context.Services.GetRequiredService<JobRunner>();
+        JobPlan plan;
+        try
         {
-            context.Err.WriteLine($"anneal: unknown solver '{unknown}'; known solvers: {string.Join(", ", SolverCatalog.Names.Order(StringComparer.Ordinal))}");
+            plan = runner.Prepare(input, request.ToJob(DefaultTimeSeconds));
+        }
+        catch (UnknownSolverException e)
+        {
+            context.Err.WriteLine("anneal: " + e.Message);
             return ExitCodes.InvalidInput;
         }
 
-        double seconds = request.TimeSeconds ?? input.Settings.TimeSeconds ?? DefaultTimeSeconds;
-        int seed = request.Seed ?? input.Settings.Seed ?? 1;
-        var options = new SolveOptions
-        {
-            TimeLimit = TimeSpan.FromSeconds(seconds),
-            IterationLimit = request.Iterations,
-            TargetObjective = request.Target,
-            Seed = seed,
-            Threads = request.Threads ?? 1,
-        };
-
         // Create the folder first: better to fail now than after the whole time budget.
+        var instance = plan.Instance;
         string folder = OutputFolder.Create(request.OutDir ?? OutputFolder.Default(context.WorkingDirectory, instance.Name, context.Now()));
         if (!request.Quiet)
         {
             context.Err.WriteLine(string.Create(CultureInfo.InvariantCulture,
-                $"Solving {InstanceDescription.Size(instance)} with {string.Join(", ", names)} for up to {seconds:0.##} s (seed {seed}); Ctrl+C stops early and keeps the best plan."));
+                $"Solving {InstanceDescription.Size(instance)} with {string.Join(", ", plan.SolverNames)} for up to {plan.Seconds:0.##} s (seed {plan.Seed}); Ctrl+C stops early and keeps the best plan."));
         }
 
         using var stop = CancellationTokenSource.CreateLinkedTokenSource(context.Cancel);
         using var signals = context.HandleSignals ? new ShutdownSignals(stop) : null;
-        var progress = request.Quiet ? null : new ProgressReporter(context.Err, context.ProgressIsTerminal, options.TimeLimit);
-        var outcome = RunCoordinator.Run(instance, names, options, progress is null ? null : progress.Report, stop.Token);
+        var progress = request.Quiet ? null : new ProgressReporter(context.Err, context.ProgressIsTerminal, plan.Options.TimeLimit);
+        var run = runner.Run(plan, progress is null ? null : progress.Report, stop.Token);
         progress?.Finish();
-        bool interrupted = stop.IsCancellationRequested;
 
-        var best = outcome.Best;
-        var facts = new RunFiles.RunFacts(seed, seconds, interrupted, context.Now().ToUniversalTime());
-        RunFiles.Write(folder, input, instance, best.Evaluation, outcome, facts);
+        var best = run.Outcome.Best;
+        context.Services.GetRequiredService<RunWriter>().Write(folder, run, context.Now().ToUniversalTime());
 
         var w = context.Out;
-        if (interrupted)
+        if (run.Interrupted)
         {
             w.WriteLine("Interrupted: the best plan found so far is written.");
         }
 
-        PrintSolvers(w, outcome);
+        PrintSolvers(w, run.Outcome);
         w.WriteLine($"Chosen: {best.Result.Solver}");
-        if (Proof(outcome) is { } proof)
+        if (Proof(run.Outcome) is { } proof)
         {
             w.WriteLine(proof);
         }
 
         PlanReport.Print(w, instance, best.Evaluation);
         w.WriteLine($"Written: {folder}");
-        return interrupted ? ExitCodes.Interrupted : best.Evaluation.Feasible ? ExitCodes.Success : ExitCodes.Infeasible;
+        return run.Interrupted ? ExitCodes.Interrupted : best.Evaluation.Feasible ? ExitCodes.Success : ExitCodes.Infeasible;
     }
 
     /// <summary>How far the written plan can be from optimal, when a solver proved a bound and the plan keeps the hard rules.</summary>
@@ -162,9 +155,9 @@ public static class SolveCommand
             var e = judged.Evaluation;
             w.WriteLine(r.BoundOnly
                 ? string.Create(CultureInfo.InvariantCulture,
-                    $"  {r.Solver,-12} lower bound {(r.LowerBound is { } lb ? lb.ToString("0.00", CultureInfo.InvariantCulture) : "none"),10}  (no plan)  reached at {r.SecondsToBest:0.0} of {r.Seconds:0.0} s  {r.Status}")
+                    $"  {r.Solver,-12} lower bound {(r.LowerBound is { } lb ? lb.ToString("0.00", CultureInfo.InvariantCulture) : "none"),10}  (no plan)  reached at {r.SecondsToBest:0.0} of {r.Seconds:0.0} s  {r.Status.ToText()}")
                 : string.Create(CultureInfo.InvariantCulture,
-                    $"  {r.Solver,-12} objective {e.Objective,12:0.00}  vehicles {e.VehiclesUsed,3}  distance {e.Distance,10:0.00}  {(e.Feasible ? "feasible" : "infeasible"),-10}  best at {r.SecondsToBest:0.0} of {r.Seconds:0.0} s  {r.Status}"));
+                    $"  {r.Solver,-12} objective {e.Objective,12:0.00}  vehicles {e.VehiclesUsed,3}  distance {e.Distance,10:0.00}  {(e.Feasible ? "feasible" : "infeasible"),-10}  best at {r.SecondsToBest:0.0} of {r.Seconds:0.0} s  {r.Status.ToText()}"));
             foreach (var note in r.Notes ?? [])
             {
                 w.WriteLine("      note: " + note);

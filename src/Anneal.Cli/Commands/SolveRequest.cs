@@ -1,3 +1,6 @@
+using Anneal.Core.Model;
+using Anneal.Jobs;
+
 namespace Anneal.Cli.Commands;
 
 /// <summary>What the user asked of `solve` on the command line; null means "take the job's setting or the default".</summary>
@@ -12,4 +15,17 @@ public sealed record SolveRequest
     public int? Threads { get; init; }
     public string? OutDir { get; init; }
     public bool Quiet { get; init; }
+
+    /// <summary>The request as the job runner takes it (the objective's text already checked by the parser).</summary>
+    public JobRequest ToJob(double defaultTimeSeconds) => new()
+    {
+        Solvers = Solvers,
+        TimeSeconds = TimeSeconds,
+        DefaultTimeSeconds = defaultTimeSeconds,
+        Iterations = Iterations,
+        Target = Target,
+        Objective = ObjectiveNames.TryParse(Objective, out var o) ? o : null,
+        Seed = Seed,
+        Threads = Threads ?? 1,
+    };
 }

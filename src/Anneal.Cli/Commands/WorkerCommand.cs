@@ -48,7 +48,7 @@ public static class WorkerCommand
         try
         {
             // Building already reads the settings (the shutdown timeout is one of them), so it may refuse them too.
-            using var host = WorkerHost.Build(settings, run);
+            using var host = WorkerHost.Build(settings, run, s => s.AddAnnealHost());
             using var outside = context.Cancel.Register(() => host.Services.GetRequiredService<IHostApplicationLifetime>().StopApplication());
             host.Run();
         }

@@ -1,7 +1,7 @@
 using System.Diagnostics;
 using System.Globalization;
 using System.Text;
-using Anneal.Search.Running;
+using Anneal.Core.Solving;
 
 namespace Anneal.Cli.Reporting;
 

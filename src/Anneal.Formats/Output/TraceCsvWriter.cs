@@ -1,4 +1,5 @@
 using System.Globalization;
+using Anneal.Core.Solving;
 
 namespace Anneal.Formats.Output;
 
@@ -7,10 +8,31 @@ public static class TraceCsvWriter
 {
     public const string FileName = "trace.csv";
 
-    public static void Write(string path, IEnumerable<TraceRow> rows) =>
+    /// <summary>Every solver's trace points, solver by solver.</summary>
+    public static IEnumerable<(string Solver, TracePoint Point)> Rows(RunOutcome outcome)
+    {
+        foreach (var judged in outcome.Results)
+        {
+            foreach (var p in judged.Result.Trace)
+            {
+                yield return (judged.Result.Solver, p);
+            }
+        }
+    }
+
+    /// <summary>One solver's trace.</summary>
+    public static IEnumerable<(string Solver, TracePoint Point)> Rows(string solver, IEnumerable<TracePoint> trace)
+    {
+        foreach (var p in trace)
+        {
+            yield return (solver, p);
+        }
+    }
+
+    public static void Write(string path, IEnumerable<(string Solver, TracePoint Point)> rows) =>
         AtomicFile.WriteText(path, writer => Write(writer, rows));
 
-    public static void Write(TextWriter writer, IEnumerable<TraceRow> rows)
+    public static void Write(TextWriter writer, IEnumerable<(string Solver, TracePoint Point)> rows)
     {
         using var csv = CsvOutput.Open(writer);
         foreach (var name in new[] { "solver", "seconds", "iteration", "best_objective", "current_objective", "best_feasible", "state" })
@@ -19,9 +41,9 @@ public static class TraceCsvWriter
         }
 
         csv.NextRecord();
-        foreach (var row in rows)
+        foreach (var (solver, row) in rows)
         {
-            csv.WriteField(row.Solver);
+            csv.WriteField(solver);
             csv.WriteField(row.Seconds.ToString("0.000", CultureInfo.InvariantCulture));
             csv.WriteField(row.Iteration.ToString(CultureInfo.InvariantCulture));
             csv.WriteField(Objective(row.BestObjective));

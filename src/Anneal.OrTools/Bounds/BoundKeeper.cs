@@ -1,7 +1,6 @@
 using System.Diagnostics;
 using System.Globalization;
-using Anneal.Search.Running;
-using Anneal.Search.Strategy;
+using Anneal.Core.Solving;
 
 namespace Anneal.OrTools.Bounds;
 

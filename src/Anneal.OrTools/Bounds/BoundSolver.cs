@@ -3,8 +3,7 @@ using System.Globalization;
 using Anneal.Bounds.Relaxation;
 using Anneal.Core.Model;
 using Anneal.Core.Plans;
-using Anneal.Search.Running;
-using Anneal.Search.Strategy;
+using Anneal.Core.Solving;
 
 namespace Anneal.OrTools.Bounds;
 
@@ -18,6 +17,9 @@ namespace Anneal.OrTools.Bounds;
 public sealed class BoundSolver : ISolver
 {
     public string Name => "bound";
+
+    /// <summary>A job without stops has nothing to bound; whether the relaxation admits a bound is known only once it is built (<see cref="Solve"/>).</summary>
+    public string? Declines(Instance instance) => instance.StopCount == 0 ? "the job has no stops" : null;
 
     /// <summary>
     /// The proven facts the exact model may assume, from the bound's stages run for at most <paramref name="budget"/>:
@@ -47,7 +49,7 @@ public sealed class BoundSolver : ISolver
         var notes = new List<string>();
         if (relaxed.Declined is { } why)
         {
-            return new SolverResult(Name, Plan.Empty, clock.Elapsed.TotalSeconds, 0, [], "no bound: " + why, null, notes, BoundOnly: true);
+            return SolverResult.Declined(Name, "no bound: " + why, boundOnly: true);
         }
 
         using var stop = CancellationTokenSource.CreateLinkedTokenSource(cancel);
@@ -59,7 +61,7 @@ public sealed class BoundSolver : ISolver
             notes.Add("relaxed for the bound: " + string.Join("; ", relaxed.Relaxed));
         }
 
-        string status = cancel.IsCancellationRequested ? "interrupted" : stop.IsCancellationRequested ? "time limit" : "completed";
+        var status = cancel.IsCancellationRequested ? SolverStatus.Interrupted : stop.IsCancellationRequested ? SolverStatus.TimeLimit : SolverStatus.Completed;
         if (keeper.Best is { } best)
         {
             notes.Add(string.Create(CultureInfo.InvariantCulture, $"lower bound {best:0.###} from {keeper.Source}"));

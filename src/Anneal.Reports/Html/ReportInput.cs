@@ -1,6 +1,6 @@
 using Anneal.Core.Evaluation;
 using Anneal.Core.Model;
-using Anneal.Reports.Runs;
+using Anneal.Formats.Output.Runs;
 using Anneal.Reports.Traces;
 
 namespace Anneal.Reports.Html;

@@ -1,4 +1,4 @@
-using Anneal.Search.Running;
+using Anneal.Core.Solving;
 
 namespace Anneal.Reports.Quality;
 

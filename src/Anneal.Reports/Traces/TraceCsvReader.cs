@@ -1,5 +1,5 @@
 using System.Globalization;
-using Anneal.Search.Running;
+using Anneal.Core.Solving;
 using CsvHelper;
 using CsvHelper.Configuration;
 

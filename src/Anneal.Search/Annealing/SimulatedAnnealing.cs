@@ -4,6 +4,7 @@ using Anneal.Search.Moves;
 using Anneal.Search.Neighbourhoods;
 using Anneal.Search.Randomness;
 using Anneal.Search.Representation;
+using Anneal.Core.Solving;
 using Anneal.Search.Running;
 using Anneal.Search.Strategy;
 
@@ -26,6 +27,8 @@ public sealed class SimulatedAnnealing : SeededSearch
     }
 
     public override string Name => "sa";
+
+    public override string? Declines(Instance instance) => null;
 
     protected override SolverResult SolveOnce(Instance instance, SolveOptions options, IProgress<TracePoint>? progress, CancellationToken cancel)
     {
@@ -151,6 +154,7 @@ public sealed class SimulatedAnnealing : SeededSearch
                 trace.Improved(Point(budget, iteration, keeper, state, $"T={temperature:G4}"));
                 if (options.TargetObjective is { } target && keeper.HasFeasible && keeper.Objective <= target)
                 {
+                    budget.ReachTarget();
                     break;
                 }
             }

@@ -2,7 +2,7 @@ using System.Diagnostics;
 using Anneal.Core.Model;
 using Anneal.Search.Neighbourhoods;
 using Anneal.Search.Representation;
-using Anneal.Search.Running;
+using Anneal.Core.Solving;
 
 namespace Anneal.Search.Construction;
 
@@ -11,6 +11,8 @@ public sealed class InsertionSolver : ISolver
 {
     public string Name => "insertion";
 
+    public string? Declines(Instance instance) => null;
+
     public SolverResult Solve(Instance instance, SolveOptions options, IProgress<TracePoint>? progress, CancellationToken cancel)
     {
         var clock = Stopwatch.StartNew();
@@ -18,7 +20,7 @@ public sealed class InsertionSolver : ISolver
         double seconds = clock.Elapsed.TotalSeconds;
         var point = new TracePoint(seconds, 0, state.Objective(), state.Objective(), state.Feasible, "construction");
         progress?.Report(point);
-        return new SolverResult(Name, state.ToPlan(), seconds, seconds, [point], cancel.IsCancellationRequested ? "interrupted" : "completed");
+        return new SolverResult(Name, state.ToPlan(), seconds, seconds, [point], cancel.IsCancellationRequested ? SolverStatus.Interrupted : SolverStatus.Completed);
     }
 
     /// <summary>A fresh state filled by cheapest insertion under high penalty weights.</summary>

@@ -1,5 +1,6 @@
 using Anneal.Core.Evaluation;
 using Anneal.Core.Model;
+using Anneal.Core.Solving;
 
 namespace Anneal.Search.Running;
 

@@ -1,4 +1,5 @@
 using Anneal.Core.Model;
+using Anneal.Core.Solving;
 
 namespace Anneal.Search.Running;
 
@@ -6,6 +7,8 @@ namespace Anneal.Search.Running;
 public abstract class SeededSearch : ISolver
 {
     public abstract string Name { get; }
+
+    public abstract string? Declines(Instance instance);
 
     public SolverResult Solve(Instance instance, SolveOptions options, IProgress<TracePoint>? progress, CancellationToken cancel) =>
         options.Threads > 1

@@ -1,5 +1,5 @@
 using System.Diagnostics;
-using Anneal.Search.Running;
+using Anneal.Core.Solving;
 
 namespace Anneal.Search.Strategy;
 
@@ -14,6 +14,8 @@ public sealed class Budget
     private readonly long _iterations;
     private readonly CancellationToken _cancel;
     private bool _timeUp;
+    private bool _iterationsUp;
+    private bool _targetReached;
 
     public Budget(SolveOptions options, CancellationToken cancel)
     {
@@ -35,6 +37,7 @@ public sealed class Budget
     {
         if (iteration >= _iterations)
         {
+            _iterationsUp = true;
             return true;
         }
 
@@ -50,5 +53,14 @@ public sealed class Budget
     public double Progress(long iteration) =>
         IterationBound ? Math.Min(1.0, (double)iteration / _iterations) : Math.Min(1.0, Elapsed / _seconds);
 
-    public string StopReason => Cancelled ? "interrupted" : "completed";
+    /// <summary>Call when the run stops because it holds a plan at or below the target.</summary>
+    public void ReachTarget() => _targetReached = true;
+
+    /// <summary>Why the run stopped: a stop request first, then the target, the iteration limit, the clock; else it ended by itself.</summary>
+    public SolverStatus StopReason =>
+        Cancelled ? SolverStatus.Interrupted
+        : _targetReached ? SolverStatus.TargetReached
+        : _iterationsUp ? SolverStatus.IterationLimit
+        : _timeUp ? SolverStatus.TimeLimit
+        : SolverStatus.Completed;
 }

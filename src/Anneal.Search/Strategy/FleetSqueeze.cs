@@ -1,5 +1,5 @@
 using Anneal.Search.Randomness;
-using Anneal.Search.Running;
+using Anneal.Core.Solving;
 
 namespace Anneal.Search.Strategy;
 

@@ -2,7 +2,7 @@ using Anneal.Core.Model;
 using Anneal.Search.Construction;
 using Anneal.Search.Neighbourhoods;
 using Anneal.Search.Representation;
-using Anneal.Search.Running;
+using Anneal.Core.Solving;
 
 namespace Anneal.Search.Strategy;
 

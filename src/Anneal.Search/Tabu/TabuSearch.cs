@@ -4,6 +4,7 @@ using Anneal.Search.Moves;
 using Anneal.Search.Neighbourhoods;
 using Anneal.Search.Randomness;
 using Anneal.Search.Representation;
+using Anneal.Core.Solving;
 using Anneal.Search.Running;
 using Anneal.Search.Strategy;
 
@@ -27,6 +28,8 @@ public sealed class TabuSearch : SeededSearch
     }
 
     public override string Name => "tabu";
+
+    public override string? Declines(Instance instance) => null;
 
     protected override SolverResult SolveOnce(Instance instance, SolveOptions options, IProgress<TracePoint>? progress, CancellationToken cancel)
     {
@@ -147,6 +150,7 @@ public sealed class TabuSearch : SeededSearch
                     _trace.Improved(Point(iteration, $"tenure={_tenure:0.#}"));
                     if (target is { } t && Keeper.HasFeasible && Keeper.Objective <= t)
                     {
+                        _budget.ReachTarget();
                         break;
                     }
                 }

@@ -1,7 +1,7 @@
 using Anneal.Core.Evaluation;
 using Anneal.Core.Plans;
 using Anneal.OrTools.Bounds;
-using Anneal.Search.Running;
+using Anneal.Core.Solving;
 using Anneal.Tests.OrTools;
 
 namespace Anneal.Tests.Bounds;
@@ -26,9 +26,8 @@ public sealed class BoundSolverTests
     [Fact]
     public void OffersNoPlanAndIsNeverChosen()
     {
-        Anneal.OrTools.OrToolsSolvers.Register();
         var instance = TinyInstances.Random(3, 6, 2);
-        var outcome = RunCoordinator.Run(instance, ["bound", "insertion"], new SolveOptions { TimeLimit = TimeSpan.FromSeconds(5) }, null, default);
+        var outcome = RunCoordinator.Run(instance, [Hosting.Catalog.Create("bound"), Hosting.Catalog.Create("insertion")], new SolveOptions { TimeLimit = TimeSpan.FromSeconds(5) }, null, default);
         Assert.True(outcome.Results[0].Result.BoundOnly);
         Assert.Empty(outcome.Results[0].Result.Plan.Routes);
         Assert.Equal("insertion", outcome.Best.Result.Solver);

@@ -1,5 +1,5 @@
 using Anneal.Cli.Reporting;
-using Anneal.Search.Running;
+using Anneal.Core.Solving;
 
 namespace Anneal.Tests.Cli;
 

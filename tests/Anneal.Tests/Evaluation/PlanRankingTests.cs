@@ -1,7 +1,7 @@
 using Anneal.Core.Evaluation;
 using Anneal.Core.Model;
 using Anneal.Core.Plans;
-using Anneal.Search.Running;
+using Anneal.Core.Solving;
 using Anneal.Tests.Output;
 
 namespace Anneal.Tests.Evaluation;
@@ -111,8 +111,8 @@ public class PlanRankingTests
         var plan = Judge(Small, [0, 1, 2]);
         var judged = new[]
         {
-            new JudgedResult(new SolverResult("ortools", Plan.Empty, 1, 0, [], "no solution (FAIL)") { HasPlan = false }, empty),
-            new JudgedResult(new SolverResult("sa", new Plan([new PlannedRoute(0, [0, 1, 2])]), 1, 0, [], "completed"), plan),
+            new JudgedResult(new SolverResult("ortools", Plan.Empty, 1, 0, [], SolverStatus.NoSolution) { HasPlan = false }, empty),
+            new JudgedResult(new SolverResult("sa", new Plan([new PlannedRoute(0, [0, 1, 2])]), 1, 0, [], SolverStatus.Completed), plan),
         };
         Assert.True(empty.Objective <= plan.Objective);
         Assert.Equal(1, RunCoordinator.Choose(judged));

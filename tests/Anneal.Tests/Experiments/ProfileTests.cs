@@ -64,11 +64,11 @@ public sealed class ProfileTests
     [Fact]
     public void Time_to_target_counts_runs_that_never_reach_it()
     {
-        var trace = new List<Anneal.Search.Running.TracePoint>
+        var trace = new List<Anneal.Core.Solving.TracePoint>
         {
             new(0.1, 1, 110, 110, true, ""), new(0.5, 2, 101.5, 101.5, true, ""), new(2.0, 3, 100.5, 100.5, true, ""),
         };
-        var never = new List<Anneal.Search.Running.TracePoint> { new(0.1, 1, 120, 120, true, "") };
+        var never = new List<Anneal.Core.Solving.TracePoint> { new(0.1, 1, 120, 120, true, "") };
         TracedRun[] runs = [new(Row("I1", "a", 100.5), trace, 100), new(Row("I2", "a", 120), never, 100)];
         var series = TimeToTarget.Compute(runs, [1, 2]);
         var within1 = series.Single(s => s.Percent == 1);

@@ -18,7 +18,7 @@ public sealed class ResumeTests : TempFolderTest
         using (var stop = new CancellationTokenSource())
         {
             int seen = 0;
-            var first = BenchRunner.Run(inputs, Settings, ReferenceValues.Empty, outDir, _ =>
+            var first = BenchRunner.Run(Hosting.Runner, inputs, Settings, ReferenceValues.Empty, outDir, _ =>
             {
                 if (++seen == 5)
                 {
@@ -30,7 +30,7 @@ public sealed class ResumeTests : TempFolderTest
             Assert.Equal(5, ResultsCsv.Read(Path.Combine(outDir, BenchRunner.ResultsFile)).Count);
         }
 
-        var second = BenchRunner.Run(inputs, Settings, ReferenceValues.Empty, outDir, null, null, CancellationToken.None);
+        var second = BenchRunner.Run(Hosting.Runner, inputs, Settings, ReferenceValues.Empty, outDir, null, null, CancellationToken.None);
         Assert.Equal(5, second.Skipped);
         Assert.Equal(19, second.Finished);
         Assert.Equal(0, second.Missing);
@@ -43,7 +43,7 @@ public sealed class ResumeTests : TempFolderTest
         Assert.All(rows, r => Assert.True(File.Exists(Path.Combine(outDir, r.TraceFile)), r.TraceFile));
 
         // A third time there is nothing left to do.
-        var third = BenchRunner.Run(inputs, Settings, ReferenceValues.Empty, outDir, null, null, CancellationToken.None);
+        var third = BenchRunner.Run(Hosting.Runner, inputs, Settings, ReferenceValues.Empty, outDir, null, null, CancellationToken.None);
         Assert.Equal((24, 0), (third.Skipped, third.Finished));
     }
 
@@ -52,13 +52,13 @@ public sealed class ResumeTests : TempFolderTest
     {
         var inputs = Instances();
         string outDir = Path.Combine(Dir, "out");
-        BenchRunner.Run(inputs, Settings, ReferenceValues.Empty, outDir, null, null, CancellationToken.None);
+        BenchRunner.Run(Hosting.Runner, inputs, Settings, ReferenceValues.Empty, outDir, null, null, CancellationToken.None);
         string path = Path.Combine(outDir, BenchRunner.ResultsFile);
         var all = ResultsCsv.Read(path);
 
         // Keep every third row, as if the experiment had stopped at random places.
         ResultsCsv.Write(path, all.Where((_, i) => i % 3 == 0));
-        var again = BenchRunner.Run(inputs, Settings, ReferenceValues.Empty, outDir, null, null, CancellationToken.None);
+        var again = BenchRunner.Run(Hosting.Runner, inputs, Settings, ReferenceValues.Empty, outDir, null, null, CancellationToken.None);
         Assert.Equal(8, again.Skipped);
         Assert.Equal(16, again.Finished);
         var keys = ResultsCsv.Read(path).Select(RunKey.Of).ToList();
@@ -74,7 +74,7 @@ public sealed class ResumeTests : TempFolderTest
         var settings = new BenchSettings { Solvers = ["sa"], Seeds = 1, Budgets = [60], Jobs = 1 };
         string outDir = Path.Combine(Dir, "out");
         using var stop = new CancellationTokenSource(TimeSpan.FromMilliseconds(300));
-        var outcome = BenchRunner.Run(inputs, settings, ReferenceValues.Empty, outDir, null, null, stop.Token);
+        var outcome = BenchRunner.Run(Hosting.Runner, inputs, settings, ReferenceValues.Empty, outDir, null, null, stop.Token);
         Assert.Equal((0, 1, 1), (outcome.Finished, outcome.Dropped, outcome.Missing));
         Assert.Empty(ResultsCsv.Read(Path.Combine(outDir, BenchRunner.ResultsFile)));
     }

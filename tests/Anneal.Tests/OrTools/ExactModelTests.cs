@@ -1,6 +1,6 @@
 using Anneal.Core.Evaluation;
 using Anneal.OrTools;
-using Anneal.Search.Running;
+using Anneal.Core.Solving;
 
 namespace Anneal.Tests.OrTools;
 
@@ -22,11 +22,11 @@ public sealed class ExactModelTests
         Assert.DoesNotContain(result.Notes ?? [], n => n.StartsWith("approximated: route duration", StringComparison.Ordinal));
         if (truth is null)
         {
-            Assert.StartsWith("no solution", result.Status, StringComparison.Ordinal);
+            Assert.Equal(SolverStatus.NoSolution, result.Status);
             return;
         }
 
-        Assert.Equal("optimal", result.Status);
+        Assert.Equal(SolverStatus.Optimal, result.Status);
         var judged = PlanEvaluator.Evaluate(instance, result.Plan);
         Assert.True(judged.Feasible);
         double tolerance = 1e-4 * Math.Max(1, truth.Value.Objective);
@@ -41,7 +41,8 @@ public sealed class ExactModelTests
     {
         var instance = TinyInstances.Random(1, 12, 2);
         var result = new ExactSolver(new ExactSettings { StopLimit = 10 }).Solve(instance, new SolveOptions(), null, default);
-        Assert.Equal("not applicable: 12 stops > 10", result.Status);
+        Assert.Equal(SolverStatus.Declined, result.Status);
+        Assert.Equal(["12 stops, above the exact model's limit of 10"], result.Notes);
         Assert.Empty(result.Plan.Routes);
     }
 }

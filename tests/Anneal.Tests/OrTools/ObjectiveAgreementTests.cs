@@ -1,7 +1,7 @@
 using Anneal.Core.Evaluation;
 using Anneal.Core.Model;
 using Anneal.OrTools;
-using Anneal.Search.Running;
+using Anneal.Core.Solving;
 
 namespace Anneal.Tests.OrTools;
 

@@ -2,7 +2,7 @@ using Anneal.Core.Evaluation;
 using Anneal.Core.Model;
 using Anneal.Core.Plans;
 using Anneal.OrTools;
-using Anneal.Search.Running;
+using Anneal.Core.Solving;
 using static Anneal.Tests.OrTools.TinyInstances;
 
 namespace Anneal.Tests.OrTools;

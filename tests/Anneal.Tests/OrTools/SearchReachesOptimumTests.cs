@@ -1,6 +1,6 @@
 using Anneal.Core.Evaluation;
 using Anneal.OrTools;
-using Anneal.Search.Running;
+using Anneal.Core.Solving;
 
 namespace Anneal.Tests.OrTools;
 
@@ -29,15 +29,15 @@ public sealed class SearchReachesOptimumTests
     [MemberData(nameof(Cases))]
     public void ReachesProvenOptimum(string solverName, int seed, int stops)
     {
-        Skip.IfNot(SolverCatalog.Exists(solverName), $"solver {solverName} is not registered");
+        Skip.IfNot(Hosting.Catalog.Exists(solverName), $"solver {solverName} is not registered");
         var instance = TinyInstances.Random(seed, stops, 2);
         var exact = new ExactSolver(new ExactSettings { Workers = 2 }).Solve(instance, new SolveOptions { TimeLimit = TimeSpan.FromSeconds(20) }, null, default); // a ceiling: these prove in under 1 s
-        Skip.IfNot(exact.Status == "optimal", $"CP-SAT did not prove optimality in time ({exact.Status})");
+        Skip.IfNot(exact.Status == SolverStatus.Optimal, $"CP-SAT did not prove optimality in time ({exact.Status})");
         double optimum = PlanEvaluator.Evaluate(instance, exact.Plan).Objective;
 
         // An iteration of tabu search scans the whole granular neighbourhood; one of annealing tries one move.
         long iterations = solverName == "tabu" ? 4_000 : 300_000;
-        var result = SolverCatalog.Create(solverName).Solve(instance, new SolveOptions { IterationLimit = iterations, TimeLimit = TimeSpan.FromMinutes(5), Seed = 1 }, null, default);
+        var result = Hosting.Catalog.Create(solverName).Solve(instance, new SolveOptions { IterationLimit = iterations, TimeLimit = TimeSpan.FromMinutes(5), Seed = 1 }, null, default);
         var judged = PlanEvaluator.Evaluate(instance, result.Plan);
         Assert.True(judged.Feasible);
         Assert.True(judged.Objective <= optimum + (1e-4 * Math.Max(1, optimum)),

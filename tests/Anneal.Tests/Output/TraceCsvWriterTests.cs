@@ -1,3 +1,4 @@
+using Anneal.Core.Solving;
 using Anneal.Formats.Output;
 
 namespace Anneal.Tests.Output;
@@ -10,9 +11,9 @@ public sealed class TraceCsvWriterTests
         var writer = new StringWriter();
         TraceCsvWriter.Write(writer,
         [
-            new TraceRow("sa", 0.5, 100, 120.5, 130, false, "T=10"),
-            new TraceRow("sa", 1.0, 200, 110.25, 111, true, "T=5"),
-            new TraceRow("tabu", 0.7, 50, 115, 115, true, "tenure=7, a \"quoted\" note"),
+            ("sa", new TracePoint(0.5, 100, 120.5, 130, false, "T=10")),
+            ("sa", new TracePoint(1.0, 200, 110.25, 111, true, "T=5")),
+            ("tabu", new TracePoint(0.7, 50, 115, 115, true, "tenure=7, a \"quoted\" note")),
         ]);
 
         var lines = writer.ToString().Split('\n', StringSplitOptions.RemoveEmptyEntries);

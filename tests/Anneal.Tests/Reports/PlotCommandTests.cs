@@ -1,7 +1,7 @@
 using Anneal.Cli;
 using Anneal.Cli.Commands;
 using Anneal.Reports;
-using Anneal.Reports.Runs;
+using Anneal.Formats.Output.Runs;
 using Anneal.Tests.Cli;
 
 namespace Anneal.Tests.Reports;

@@ -1,6 +1,6 @@
 using Anneal.Reports.Plots;
 using Anneal.Reports.Quality;
-using Anneal.Search.Running;
+using Anneal.Core.Solving;
 
 namespace Anneal.Tests.Reports;
 

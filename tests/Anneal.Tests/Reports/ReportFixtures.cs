@@ -4,7 +4,7 @@ using Anneal.Core.Plans;
 using Anneal.Core.Travel;
 using Anneal.Formats.Input;
 using Anneal.Reports.Traces;
-using Anneal.Search.Running;
+using Anneal.Core.Solving;
 
 namespace Anneal.Tests.Reports;
 

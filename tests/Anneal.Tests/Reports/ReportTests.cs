@@ -3,7 +3,7 @@ using Anneal.Core.Evaluation;
 using Anneal.Core.Model;
 using Anneal.Formats.Output;
 using Anneal.Reports.Html;
-using Anneal.Reports.Runs;
+using Anneal.Formats.Output.Runs;
 using Anneal.Tests.Output;
 
 namespace Anneal.Tests.Reports;

@@ -7,7 +7,7 @@ using Anneal.Search.Construction;
 using Anneal.Search.Neighbourhoods;
 using Anneal.Search.Randomness;
 using Anneal.Search.Representation;
-using Anneal.Search.Running;
+using Anneal.Core.Solving;
 using Anneal.Search.Strategy;
 
 namespace Anneal.Tests.Search;

@@ -1,6 +1,6 @@
 using Anneal.Core.Evaluation;
 using Anneal.Core.Model;
-using Anneal.Search.Running;
+using Anneal.Core.Solving;
 
 namespace Anneal.Tests.Search;
 
@@ -30,7 +30,7 @@ public sealed class MetaheuristicTests
         var instance = RandomInstances.Create(rng, rng.Next(5, 8), 2, hardWindows: seed % 2 == 0, dims: 1 + (seed % 2), heterogeneous: seed % 3 == 0);
         var optimum = BruteForce.Best(instance);
         var options = new SolveOptions { TimeLimit = TimeSpan.FromMinutes(5), IterationLimit = solver == "sa" ? 300_000 : 3_000, Seed = seed };
-        var result = SolverCatalog.Create(solver).Solve(instance, options, null, CancellationToken.None);
+        var result = Hosting.Catalog.Create(solver).Solve(instance, options, null, CancellationToken.None);
         var found = PlanEvaluator.Evaluate(instance, result.Plan);
         Assert.Equal(optimum.Feasible, found.Feasible);
         Assert.True(Math.Abs(found.Objective - optimum.Objective) <= 1e-6 * Math.Max(1, Math.Abs(optimum.Objective)),
@@ -44,10 +44,10 @@ public sealed class MetaheuristicTests
     {
         var instance = RandomInstances.Create(new Random(77), 40, 6, hardWindows: true, dims: 2);
         var options = new SolveOptions { TimeLimit = TimeSpan.FromMinutes(5), IterationLimit = solver == "sa" ? 200_000 : 400, Seed = 9 };
-        var first = SolverCatalog.Create(solver).Solve(instance, options, null, CancellationToken.None);
-        var second = SolverCatalog.Create(solver).Solve(instance, options, null, CancellationToken.None);
+        var first = Hosting.Catalog.Create(solver).Solve(instance, options, null, CancellationToken.None);
+        var second = Hosting.Catalog.Create(solver).Solve(instance, options, null, CancellationToken.None);
         Assert.Equal(Describe(first), Describe(second));
-        var other = SolverCatalog.Create(solver).Solve(instance, options with { Seed = 10 }, null, CancellationToken.None);
+        var other = Hosting.Catalog.Create(solver).Solve(instance, options with { Seed = 10 }, null, CancellationToken.None);
         Assert.NotEqual(Describe(first) + first.Trace.Count, Describe(other) + other.Trace.Count);
     }
 
@@ -58,8 +58,8 @@ public sealed class MetaheuristicTests
     {
         var instance = RandomInstances.Create(new Random(5), 60, 8, hardWindows: false, dims: 1);
         using var cancel = new CancellationTokenSource(TimeSpan.FromMilliseconds(300));
-        var result = SolverCatalog.Create(solver).Solve(instance, new SolveOptions { TimeLimit = TimeSpan.FromMinutes(10) }, null, cancel.Token);
-        Assert.Equal("interrupted", result.Status);
+        var result = Hosting.Catalog.Create(solver).Solve(instance, new SolveOptions { TimeLimit = TimeSpan.FromMinutes(10) }, null, cancel.Token);
+        Assert.Equal(SolverStatus.Interrupted, result.Status);
         Assert.Empty(result.Plan.StructureErrors(instance));
         Assert.NotEmpty(result.Trace);
         var judged = PlanEvaluator.Evaluate(instance, result.Plan);
@@ -75,8 +75,8 @@ public sealed class MetaheuristicTests
         long iterations = solver == "sa" ? 50_000 : 200;
         var options = new SolveOptions { TimeLimit = TimeSpan.FromMinutes(5), IterationLimit = iterations, Seed = 3 };
         var single = new[] { 3, 1003 }.Select(seed => PlanEvaluator.Evaluate(instance,
-            SolverCatalog.Create(solver).Solve(instance, options with { Seed = seed }, null, CancellationToken.None).Plan)).ToList();
-        var both = SolverCatalog.Create(solver).Solve(instance, options with { Threads = 2 }, null, CancellationToken.None);
+            Hosting.Catalog.Create(solver).Solve(instance, options with { Seed = seed }, null, CancellationToken.None).Plan)).ToList();
+        var both = Hosting.Catalog.Create(solver).Solve(instance, options with { Threads = 2 }, null, CancellationToken.None);
         var judged = PlanEvaluator.Evaluate(instance, both.Plan);
         Assert.Contains(both.Notes!, n => n.Contains("best of 2", StringComparison.Ordinal));
         var expected = single[1].IsBetterThan(single[0]) ? single[1] : single[0];

@@ -1,6 +1,5 @@
-using Anneal.Search.Running;
 
-namespace Anneal.Search.Strategy;
+namespace Anneal.Core.Solving;
 
 /// <summary>
 /// Records a run's convergence: every improvement of the best, plus samples at a bounded rate, so a long run's

@@ -1,45 +1,39 @@
 using Anneal.Core.Evaluation;
 using Anneal.Core.Model;
 
-namespace Anneal.Search.Running;
-
-/// <summary>A solver's result with the evaluator's verdict on its plan.</summary>
-public sealed record JudgedResult(SolverResult Result, PlanEvaluation Evaluation)
-{
-    /// <summary>The verdict to rank, or null when the solver found no plan.</summary>
-    public PlanEvaluation? Ranked => Result.HasPlan ? Evaluation : null;
-}
-
-/// <summary>All solvers' results and the plan chosen among them (in <see cref="PlanRanking"/>'s order).</summary>
-public sealed record RunOutcome(IReadOnlyList<JudgedResult> Results, int Chosen)
-{
-    public JudgedResult Best => Results[Chosen];
-}
+namespace Anneal.Core.Solving;
 
 /// <summary>Runs several solvers side by side on one instance with the same wall-clock budget.</summary>
 public static class RunCoordinator
 {
+    /// <param name="solvers">Solver k runs with seed + k. One that declines the instance is not started.</param>
     /// <param name="progress">Receives (solver name, trace point) from every solver as it improves.</param>
     public static RunOutcome Run(
         Instance instance,
-        IReadOnlyList<string> solverNames,
+        IReadOnlyList<ISolver> solvers,
         SolveOptions options,
         Action<string, TracePoint>? progress,
         CancellationToken cancel)
     {
-        var results = new SolverResult[solverNames.Count];
-        var threads = new Thread[solverNames.Count];
-        for (int k = 0; k < solverNames.Count; k++)
+        var results = new SolverResult[solvers.Count];
+        var threads = new List<Thread>(solvers.Count);
+        for (int k = 0; k < solvers.Count; k++)
         {
+            var solver = solvers[k];
+            if (solver.Declines(instance) is { } reason)
+            {
+                results[k] = SolverResult.Declined(solver.Name, reason);
+                continue;
+            }
+
             int index = k;
-            var solver = SolverCatalog.Create(solverNames[k]);
             var own = options with { Seed = options.Seed + index };
             IProgress<TracePoint>? sink = progress is null ? null : new SynchronousProgress(p => progress(solver.Name, p));
-            threads[k] = new Thread(() => results[index] = solver.Solve(instance, own, sink, cancel))
+            threads.Add(new Thread(() => results[index] = solver.Solve(instance, own, sink, cancel))
             {
                 IsBackground = true,
                 Name = "solver " + solver.Name,
-            };
+            });
         }
 
         foreach (var t in threads)
@@ -58,7 +52,7 @@ public static class RunCoordinator
             judged[k] = new JudgedResult(results[k], PlanEvaluator.Evaluate(instance, results[k].Plan));
         }
 
-        return new RunOutcome(judged, Choose(judged));
+        return new RunOutcome(judged, Choose(judged)) { Interrupted = cancel.IsCancellationRequested };
     }
 
     /// <summary>The first result that no later one beats in <see cref="PlanRanking"/>'s order; a solver without a plan is never chosen over one with.</summary>

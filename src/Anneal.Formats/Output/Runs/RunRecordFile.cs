@@ -1,9 +1,9 @@
 using System.Text.Json;
 using Anneal.Core.Evaluation;
 using Anneal.Core.Model;
-using Anneal.Formats.Output;
+using Anneal.Formats.Output.Artifacts;
 
-namespace Anneal.Reports.Runs;
+namespace Anneal.Formats.Output.Runs;
 
 /// <summary>Writes and reads run.json (same JSON conventions as summary.json).</summary>
 public static class RunRecordFile
@@ -27,6 +27,20 @@ public static class RunRecordFile
             throw new InvalidDataException($"{path} is not a run record: {e.Message}", e);
         }
     }
+
+    /// <summary>The record of a finished run, from its summary.</summary>
+    public static RunRecord Record(RunContext run) => new(
+        RunRecord.CurrentVersion,
+        System.IO.Path.GetFullPath(run.Input.Path),
+        run.Input.Format,
+        run.Instance.Objective.ToText(),
+        Routes(run.Instance, run.Plan),
+        run.Summary.Solvers,
+        run.Summary.Chosen,
+        run.Summary.Seed,
+        run.Summary.TimeLimitSeconds,
+        run.Summary.Interrupted,
+        run.Summary.GeneratedAt);
 
     /// <summary>The plan as run.json keeps it: ids, so that it survives re-reading the input.</summary>
     public static IReadOnlyList<RouteRecord> Routes(Instance instance, PlanEvaluation evaluation)

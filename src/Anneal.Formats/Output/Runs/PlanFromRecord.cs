@@ -1,7 +1,7 @@
 using Anneal.Core.Model;
 using Anneal.Core.Plans;
 
-namespace Anneal.Reports.Runs;
+namespace Anneal.Formats.Output.Runs;
 
 /// <summary>Turns run.json's routes (ids) back into a plan on a freshly read instance.</summary>
 public static class PlanFromRecord

@@ -1,4 +1,4 @@
-namespace Anneal.Search.Running;
+namespace Anneal.Core.Solving;
 
 /// <summary>How long and how a solver may run. The first limit reached stops it.</summary>
 public sealed record SolveOptions

@@ -1,4 +1,4 @@
-namespace Anneal.Search.Running;
+namespace Anneal.Core.Solving;
 
 /// <summary>
 /// A solver that proves lower bounds traces the bound as it rises: each point's best and current objective are the

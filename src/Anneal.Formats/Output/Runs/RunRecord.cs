@@ -1,6 +1,5 @@
-using Anneal.Formats.Output;
 
-namespace Anneal.Reports.Runs;
+namespace Anneal.Formats.Output.Runs;
 
 /// <summary>
 /// run.json: what a run folder must hold so that `anneal plot` can redraw every picture and the report without

@@ -1,0 +1,44 @@
+using Anneal.Core.Solving;
+using Anneal.Formats.Input;
+
+namespace Anneal.Jobs;
+
+/// <summary>
+/// The one run pipeline of every host (`solve`, the worker, `bench`): a job and a request in, the solvers run side by
+/// side, every plan judged by the evaluator, the outcome out. Settings resolve the same way everywhere: the request,
+/// then the job's settings.json, then the defaults.
+/// </summary>
+public sealed class JobRunner(SolverCatalog catalog)
+{
+    public SolverCatalog Catalog => catalog;
+
+    /// <exception cref="UnknownSolverException">when the request or the job names a solver the catalogue lacks.</exception>
+    public JobPlan Prepare(LoadedInput input, JobRequest request)
+    {
+        var objective = request.Objective ?? input.Settings.Objective ?? input.Instance.Objective;
+        var instance = objective == input.Instance.Objective ? input.Instance : input.Instance.With(objective: objective);
+        var names = catalog.Resolve(request.Solvers, input.Settings.Solvers, instance);
+        var solvers = new List<ISolver>(names.Count);
+        foreach (var name in names)
+        {
+            solvers.Add(catalog.Create(name));
+        }
+
+        var options = new SolveOptions
+        {
+            TimeLimit = TimeSpan.FromSeconds(request.TimeSeconds ?? input.Settings.TimeSeconds ?? request.DefaultTimeSeconds),
+            IterationLimit = request.Iterations,
+            TargetObjective = request.Target,
+            Seed = request.Seed ?? input.Settings.Seed ?? 1,
+            Threads = request.Threads,
+        };
+        return new JobPlan(input, instance, solvers, options);
+    }
+
+    /// <param name="progress">Receives (solver name, trace point) from every solver as it improves, on the solvers' threads.</param>
+    public JobRun Run(JobPlan plan, Action<string, TracePoint>? progress, CancellationToken cancel) =>
+        new(plan, RunCoordinator.Run(plan.Instance, plan.Solvers, plan.Options, progress, cancel));
+
+    public JobRun Run(LoadedInput input, JobRequest request, Action<string, TracePoint>? progress, CancellationToken cancel) =>
+        Run(Prepare(input, request), progress, cancel);
+}

@@ -1,0 +1,17 @@
+using Anneal.Formats.Output.Artifacts;
+using Microsoft.Extensions.DependencyInjection;
+
+namespace Anneal.Reports;
+
+/// <summary>The pictures and report.html of a run, drawn from the run.json and trace.csv written before them.</summary>
+public sealed class PicturesArtifact : IRunArtifact
+{
+    public void Write(RunContext run) => RunReport.Write(run.Folder, run.Instance, run.Plan);
+}
+
+public static class ReportServices
+{
+    /// <summary>Adds the pictures and report.html to every run; register after <c>AddAnneal</c>, whose files they read.</summary>
+    public static IServiceCollection AddPictures(this IServiceCollection services) =>
+        services.AddSingleton<IRunArtifact, PicturesArtifact>();
+}
