@@ -1,1 +1,3 @@
+global using Anneal.Tests.Fixtures;
+global using Anneal.Tests.Oracles;
 global using Xunit;

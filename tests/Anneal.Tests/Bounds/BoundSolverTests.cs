@@ -2,7 +2,6 @@ using Anneal.Core.Evaluation;
 using Anneal.Core.Plans;
 using Anneal.OrTools.Bounds;
 using Anneal.Core.Solving;
-using Anneal.Tests.OrTools;
 
 namespace Anneal.Tests.Bounds;
 
@@ -33,7 +32,7 @@ public sealed class BoundSolverTests
         Assert.Equal("insertion", outcome.Best.Result.Solver);
     }
 
-    private static void AtMostOptimum(Core.Model.Instance instance, int seed)
+    private static void AtMostOptimum(Anneal.Core.Model.Instance instance, int seed)
     {
         var truth = BruteForce.Optimum(instance);
         var result = new BoundSolver().Solve(instance, new SolveOptions { TimeLimit = TimeSpan.FromSeconds(10) }, null, default);

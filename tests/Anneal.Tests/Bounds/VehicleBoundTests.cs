@@ -1,8 +1,7 @@
 using Anneal.Bounds.Relaxation;
 using Anneal.Bounds.Vehicles;
 using Anneal.Core.Model;
-using Anneal.Tests.OrTools;
-using static Anneal.Tests.OrTools.TinyInstances;
+using static Anneal.Tests.Fixtures.TinyInstances;
 
 namespace Anneal.Tests.Bounds;
 

@@ -3,7 +3,6 @@ using Anneal.Cli;
 using Anneal.Cli.Commands;
 using Anneal.Core.Plans;
 using Anneal.Formats.Input;
-using Anneal.Tests.Output;
 
 namespace Anneal.Tests.Cli;
 

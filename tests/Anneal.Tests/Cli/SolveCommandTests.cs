@@ -2,7 +2,6 @@ using System.Text.Json;
 using Anneal.Cli;
 using Anneal.Cli.Commands;
 using Anneal.Formats.Output;
-using Anneal.Tests.Output;
 
 namespace Anneal.Tests.Cli;
 

@@ -1,8 +1,7 @@
 using System.Text.Json;
 using Anneal.Cli;
 using Anneal.Experiments;
-using Anneal.Tests.Cli;
-using Anneal.Tests.Formats.BenchmarkReaders;
+using Anneal.Tests.Formats.Input.BenchmarkReaders;
 using Anneal.Tests.Reports;
 
 namespace Anneal.Tests.Experiments;

@@ -1,7 +1,6 @@
 using Anneal.Experiments;
 using Anneal.Formats.Input;
-using Anneal.Tests.Formats.BenchmarkReaders;
-using Anneal.Tests.Output;
+using Anneal.Tests.Formats.Input.BenchmarkReaders;
 
 namespace Anneal.Tests.Experiments;
 

@@ -3,7 +3,7 @@ using Anneal.Core.Model;
 using Anneal.Core.Plans;
 using Anneal.OrTools;
 using Anneal.Core.Solving;
-using static Anneal.Tests.OrTools.TinyInstances;
+using static Anneal.Tests.Fixtures.TinyInstances;
 
 namespace Anneal.Tests.OrTools;
 

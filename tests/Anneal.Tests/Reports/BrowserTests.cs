@@ -1,7 +1,6 @@
 using System.Diagnostics;
 using System.Text.RegularExpressions;
 using Anneal.Formats.Output.Runs;
-using Anneal.Tests.Output;
 
 namespace Anneal.Tests.Reports;
 

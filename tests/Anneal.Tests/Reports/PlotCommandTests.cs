@@ -2,7 +2,6 @@ using Anneal.Cli;
 using Anneal.Cli.Commands;
 using Anneal.Reports;
 using Anneal.Formats.Output.Runs;
-using Anneal.Tests.Cli;
 
 namespace Anneal.Tests.Reports;
 

@@ -4,7 +4,6 @@ using Anneal.Core.Model;
 using Anneal.Formats.Output;
 using Anneal.Reports.Html;
 using Anneal.Formats.Output.Runs;
-using Anneal.Tests.Output;
 
 namespace Anneal.Tests.Reports;
 

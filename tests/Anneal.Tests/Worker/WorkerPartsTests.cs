@@ -1,5 +1,4 @@
 using Anneal.Cli;
-using Anneal.Tests.Output;
 using Anneal.Worker;
 
 namespace Anneal.Tests.Worker;

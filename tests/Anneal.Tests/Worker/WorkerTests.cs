@@ -1,5 +1,4 @@
 using System.Text.Json;
-using Anneal.Tests.Output;
 
 namespace Anneal.Tests.Worker;
 

@@ -1,0 +1,174 @@
+using Anneal.Core.Evaluation;
+using Anneal.Core.Model;
+using Anneal.Core.Plans;
+using Anneal.Search.Moves;
+using Anneal.Search.Representation;
+
+namespace Anneal.Tests.Search.Representation;
+
+/// <summary>
+/// Every incremental move evaluation agrees with the exact evaluator (PlanEvaluator, the truth) on random
+/// instances, random plans and random moves: same penalized cost change to 1e-6 and the same feasibility.
+/// </summary>
+public sealed class IncrementalEvaluationTests
+{
+    public static TheoryData<bool, bool, int> Cases => new()
+    {
+        { true, false, 1 },   // hard single windows: O(1) segment concatenation
+        { true, false, 3 },
+        { false, false, 2 },  // soft windows: lateness propagates, exact forward pass
+        { true, true, 1 },    // several windows per stop
+        { false, true, 2 },
+    };
+
+    [Theory]
+    [MemberData(nameof(Cases))]
+    public void MoveDeltaMatchesExactEvaluator(bool hardWindows, bool multiWindows, int dims)
+    {
+        int checkedMoves = 0;
+        for (int seed = 0; seed < 40; seed++)
+        {
+            var rng = new Random(seed);
+            var instance = RandomInstances.Create(rng, rng.Next(6, 22), rng.Next(2, 5), hardWindows, multiWindows, dims, heterogeneous: seed % 2 == 1);
+            var weights = new PenaltyWeights { TimeWindow = 3.5, Capacity = 7, Overtime = 2, Duration = 1.5, Equipment = 50, Unserved = 1000 };
+            var state = new SearchState(instance, weights);
+            Assert.Equal(hardWindows && !multiWindows, state.FastPath);
+            state.Load(RandomPlan(rng, instance));
+            for (int step = 0; step < 150; step++)
+            {
+                var move = default(MoveDraft);
+                if (!RandomMove(rng, state, ref move))
+                {
+                    continue;
+                }
+
+                double before = PlanEvaluator.Penalized(instance, state.ToPlan(), weights);
+                double objectiveBefore = PlanEvaluator.Evaluate(instance, state.ToPlan()).Objective;
+                double delta = state.Delta(ref move);
+                var effect = state.Evaluate(ref move);
+                var parts = state.EvaluateParts(ref move);
+                bool partsFeasible = state.FeasibleAfter(parts);
+                bool opens = state.OpensRoute(ref move);
+                bool empties = state.EmptiesRoute(ref move);
+                int usedBefore = state.ToPlan().VehiclesUsed;
+                double routeBefore = RouteObjective(PlanEvaluator.Evaluate(instance, state.ToPlan()), move.A.Route);
+                bool routeKeepsRules = state.FeasibleChange(ref move.A, out double routeChange);
+                state.Apply(ref move);
+                var plan = state.ToPlan();
+                Assert.Equal(empties, parts.EmptiesRoute);
+                Assert.Equal(opens, parts.OpensRoute);
+                Assert.Equal((opens ? 1 : 0) - (empties ? 1 : 0), plan.VehiclesUsed - usedBefore);
+                var truth = PlanEvaluator.Evaluate(instance, plan);
+                double after = PlanEvaluator.Penalized(instance, plan, weights);
+                double tolerance = 1e-6 * Math.Max(1, Math.Abs(before));
+                var routeTruth = truth.Routes.FirstOrDefault(r => r.Vehicle == move.A.Route);
+                Assert.Equal(routeTruth?.Feasible ?? true, routeKeepsRules);
+                if (routeKeepsRules)
+                {
+                    Assert.True(Math.Abs(RouteObjective(truth, move.A.Route) - routeBefore - routeChange) <= tolerance,
+                        $"seed {seed} step {step} {move.Kind}: route change {routeChange}, exact {RouteObjective(truth, move.A.Route) - routeBefore}");
+                }
+
+                Assert.True(Math.Abs(after - before - delta) <= tolerance,
+                    $"seed {seed} step {step} {move.Kind}: incremental delta {delta}, exact {after - before}");
+                Assert.True(Math.Abs(effect.Penalized - delta) <= tolerance, "Evaluate and Delta disagree");
+                Assert.True(Math.Abs(truth.Objective - objectiveBefore - effect.Objective) <= tolerance,
+                    $"seed {seed} step {step} {move.Kind}: objective delta {effect.Objective}, exact {truth.Objective - objectiveBefore}");
+                Assert.Equal(truth.Feasible, effect.FeasibleAfter);
+                Assert.True(Math.Abs(parts.Penalized(weights) - delta) <= tolerance, $"{move.Kind}: parts {parts.Penalized(weights)} vs delta {delta}");
+                Assert.True(Math.Abs(parts.Objective - effect.Objective) <= tolerance, "parts objective differs");
+                Assert.Equal(truth.Feasible, partsFeasible);
+                Assert.Equal(truth.Feasible, parts.FeasibleAfter);
+                Assert.Equal(truth.Feasible, state.Feasible);
+                Assert.True(Math.Abs(state.CurrentPenalized - after) <= tolerance, "running penalized total drifted");
+                Assert.True(Math.Abs(state.CurrentObjective - truth.Objective) <= tolerance, "running objective total drifted");
+                checkedMoves++;
+            }
+        }
+
+        Assert.True(checkedMoves > 1000, $"only {checkedMoves} moves were checked");
+    }
+
+    [Fact]
+    public void DraftMeasuresMatchScheduler()
+    {
+        // The segment summaries must reproduce every measure, not only the total cost.
+        for (int seed = 0; seed < 30; seed++)
+        {
+            var rng = new Random(1000 + seed);
+            var instance = RandomInstances.Create(rng, rng.Next(5, 18), 3, hardWindows: true, dims: 2, heterogeneous: true);
+            var state = new SearchState(instance, PenaltyWeights.Uniform(1));
+            state.Load(RandomPlan(rng, instance));
+            for (int step = 0; step < 100; step++)
+            {
+                var move = default(MoveDraft);
+                if (!RandomMove(rng, state, ref move) || move.RouteCount == 0)
+                {
+                    continue;
+                }
+
+                state.MeasureDraft(ref move.A, out var fast);
+                state.Apply(ref move);
+                var exact = RouteScheduler.Measure(instance, move.A.Route, state.Route(move.A.Route));
+                Assert.Equal(exact.Distance, fast.Distance, 6);
+                Assert.Equal(exact.Duration, fast.Duration, 6);
+                Assert.Equal(exact.TimeWindowViolation, fast.TimeWindowViolation, 6);
+                Assert.Equal(exact.Overtime, fast.Overtime, 6);
+                Assert.Equal(exact.DurationExcess, fast.DurationExcess, 6);
+                Assert.Equal(exact.Overload, fast.Overload, 6);
+                Assert.Equal(exact.MissingEquipment, fast.MissingEquipment);
+                if (exact.StopCount > 0)
+                {
+                    Assert.Equal(exact.Return, fast.Return, 6);
+                }
+            }
+        }
+    }
+
+    private static double RouteObjective(PlanEvaluation evaluation, int vehicle) =>
+        evaluation.Routes.FirstOrDefault(r => r.Vehicle == vehicle)?.Objective ?? 0;
+
+    internal static Plan RandomPlan(Random rng, Instance instance)
+    {
+        var lists = new List<int>[instance.Vehicles.Count];
+        for (int v = 0; v < lists.Length; v++)
+        {
+            lists[v] = [];
+        }
+
+        var order = Enumerable.Range(0, instance.StopCount).OrderBy(_ => rng.Next()).ToArray();
+        foreach (int s in order)
+        {
+            if (rng.Next(8) == 0)
+            {
+                continue; // unserved
+            }
+
+            lists[rng.Next(lists.Length)].Add(s);
+        }
+
+        return new Plan(lists.Select((l, v) => new PlannedRoute(v, l.ToArray())).Where(r => r.Stops.Length > 0).ToArray());
+    }
+
+    internal static bool RandomMove(Random rng, SearchState s, ref MoveDraft m)
+    {
+        int n = s.StopCount;
+        int u = rng.Next(n), v = rng.Next(n);
+        switch (rng.Next(9))
+        {
+            case 0: return MoveBuilder.Relocate(s, ref m, u, v, rng.Next(2) == 0);
+            case 1: return MoveBuilder.Relocate(s, ref m, u, v, rng.Next(2) == 0, chain: rng.Next(2, 4));
+            case 2: return MoveBuilder.Exchange(s, ref m, u, v);
+            case 3: return MoveBuilder.Exchange(s, ref m, u, v, rng.Next(1, 4), rng.Next(1, 4));
+            case 4: return MoveBuilder.TwoOptStar(s, ref m, u, v, rng.Next(2) == 0);
+            case 5: return MoveBuilder.TwoOpt(s, ref m, u, v);
+            case 6: return MoveBuilder.Drop(s, ref m, u);
+            case 7:
+                int empty = Enumerable.Range(0, s.RouteCount).FirstOrDefault(r => s.Length(r) == 0, -1);
+                return s.RouteOf(u) < 0
+                    ? MoveBuilder.Insert(s, ref m, u, empty >= 0 && rng.Next(3) == 0 ? -1 : v, rng.Next(2) == 0, empty)
+                    : empty >= 0 && MoveBuilder.ToEmptyRoute(s, ref m, u, empty);
+            default: return MoveBuilder.Insert(s, ref m, u, v, rng.Next(2) == 0);
+        }
+    }
+}
