@@ -2,7 +2,7 @@ using Anneal.Formats.Input;
 
 namespace Anneal.Cli.Reporting;
 
-/// <summary>Prints input problems one per line, grouped by file in the order the files were first mentioned.</summary>
+/// <summary>Prints input problems one per line, grouped by file (and workbook sheet) in the order they were first mentioned.</summary>
 public static class ProblemPrinter
 {
     public static void Print(TextWriter writer, IReadOnlyList<InputProblem> problems)
@@ -11,11 +11,12 @@ public static class ProblemPrinter
         var byFile = new Dictionary<string, List<InputProblem>>(StringComparer.Ordinal);
         foreach (var p in problems)
         {
-            if (!byFile.TryGetValue(p.File, out var list))
+            string file = p.Sheet is null ? p.File : $"{p.File}, sheet '{p.Sheet}'";
+            if (!byFile.TryGetValue(file, out var list))
             {
                 list = [];
-                byFile[p.File] = list;
-                files.Add(p.File);
+                byFile[file] = list;
+                files.Add(file);
             }
 
             list.Add(p);

@@ -1,6 +1,8 @@
+using Anneal.Formats.Input.Workbook;
+
 namespace Anneal.Formats.Input;
 
-/// <summary>Front door for reading any supported input: a CSV job folder or a benchmark file, detected from content.</summary>
+/// <summary>Front door for reading any supported input: a CSV job folder, a workbook (.xlsx) or a benchmark file, detected from content.</summary>
 public static class InputLoader
 {
     /// <exception cref="InputException">with every problem found.</exception>
@@ -14,7 +16,18 @@ public static class InputLoader
         if (!File.Exists(path))
         {
             throw new InputException(new InputProblem(path, null, null, null,
-                "no such file or folder", "give the path of a CSV job folder, a Solomon .txt file or a CVRPLIB .vrp file"));
+                "no such file or folder", "give the path of a CSV job folder, an .xlsx workbook, a Solomon .txt file or a CVRPLIB .vrp file"));
+        }
+
+        if (WorkbookReader.LooksLike(path))
+        {
+            return WorkbookReader.Read(path);
+        }
+
+        if (path.EndsWith(".xls", StringComparison.OrdinalIgnoreCase) || path.EndsWith(".ods", StringComparison.OrdinalIgnoreCase))
+        {
+            throw new InputException(new InputProblem(path, null, null, null, "this spreadsheet format is not read (only .xlsx workbooks are)",
+                "save the workbook as .xlsx (Excel workbook), or export its sheets as CSV files into a job folder"));
         }
 
         string text;

@@ -18,9 +18,20 @@ public sealed record InputProblem(string File, int? Row, string? Column, string?
 
     public string Fix { get; init; } = Quote.Cap(Fix, Quote.TextCharacters);
 
+    /// <summary>The workbook sheet the problem is on; null for other files.</summary>
+    public string? Sheet { get; init; }
+
+    /// <summary>The workbook cell (e.g. "D4") the problem is in, when it is about one cell.</summary>
+    public string? Cell { get; init; }
+
     public override string ToString()
     {
         var where = File;
+        if (Sheet is not null)
+        {
+            where += $", sheet '{Sheet}'";
+        }
+
         if (Row is not null)
         {
             where += $", row {Row}";
@@ -29,6 +40,11 @@ public sealed record InputProblem(string File, int? Row, string? Column, string?
         if (Column is not null)
         {
             where += $", column '{Column}'";
+        }
+
+        if (Cell is not null)
+        {
+            where += $" (cell {Cell})";
         }
 
         var value = Value is null ? string.Empty : $" (value '{Value}')";

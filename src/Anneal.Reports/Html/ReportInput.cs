@@ -26,5 +26,5 @@ public sealed record ReportInput(Instance Instance, PlanEvaluation Plan, RunReco
     }
 
     /// <summary>Kilometres for CSV jobs; benchmark files have unitless distance.</summary>
-    public string DistanceUnit => Run.Format == "csv-job" ? " km" : string.Empty;
+    public string DistanceUnit => Run.Format is "csv-job" or "workbook" ? " km" : string.Empty;
 }

@@ -11,6 +11,8 @@ internal readonly struct Cells(CsvTable table, CsvRow row, ProblemList problems)
 
     public ProblemList Problems => problems;
 
+    public JobNames Names => table.Names;
+
     /// <summary>The trimmed cell text, or "" when the column or the cell is absent.</summary>
     public string Text(string column)
     {
@@ -45,7 +47,7 @@ internal readonly struct Cells(CsvTable table, CsvRow row, ProblemList problems)
     }
 
     public void Report(string column, string? value, string problem, string fix) =>
-        problems.Add(table.File, row.Line, Name(column), value, problem, fix);
+        problems.Add(table, row.Line, Name(column), value, problem, fix);
 
     /// <summary>A finite number; <paramref name="fallback"/> when empty (NaN fallback makes it required).</summary>
     public double Number(string column, double fallback, bool nonNegative, string meaning)

@@ -10,8 +10,8 @@ internal static class Coordinates
         bool x = table.Has("x"), y = table.Has("y"), lat = table.Has("lat"), lon = table.Has("lon");
         if ((x || y) && (lat || lon))
         {
-            problems.Add(table.File, 1, null, null, "the file mixes planar x/y and lat/lon columns",
-                "use either x and y (planar km) or lat and lon (degrees), in stops.csv and depots.csv alike");
+            problems.Add(table, 1, null, null, "the file mixes planar x/y and lat/lon columns",
+                $"use either x and y (planar km) or lat and lon (degrees), in {table.Names.Stops} and {table.Names.Depots} alike");
             return CoordinateSystem.None;
         }
 
@@ -27,7 +27,7 @@ internal static class Coordinates
             return ok ? CoordinateSystem.LatLon : CoordinateSystem.None;
         }
 
-        problems.Add(table.File, 1, "x, y or lat, lon", null, "no coordinate columns", "add columns x and y (planar km) or lat and lon (degrees)");
+        problems.Add(table, 1, "x, y or lat, lon", null, "no coordinate columns", "add columns x and y (planar km) or lat and lon (degrees)");
         return CoordinateSystem.None;
     }
 

@@ -9,11 +9,20 @@ namespace Anneal.Formats.Input.Csv;
 /// found from the header line. Quoting faults found by CsvHelper become problems on the line where the record
 /// starts; they never escape as exceptions.
 /// </summary>
-internal sealed class CsvTable
+internal sealed record CsvTable
 {
     public required string File { get; init; }
 
     public CsvDialect Dialect { get; init; } = CsvDialect.Comma;
+
+    /// <summary>The text encoding when it was not UTF-8 (e.g. "Windows-1252"); null for UTF-8.</summary>
+    public string? Encoding { get; init; }
+
+    /// <summary>The workbook sheet this table was read from; null for a CSV file.</summary>
+    public string? Sheet { get; init; }
+
+    /// <summary>What the job's parts are called in messages that point from one to another.</summary>
+    public JobNames Names { get; init; } = JobNames.Csv;
 
     /// <summary>Numbers read with a decimal comma, so that `check` can say the file used them.</summary>
     public int DecimalCommasRead { get; set; }
@@ -37,6 +46,24 @@ internal sealed class CsvTable
     }
 
     public bool Has(string column) => IndexOf(column) >= 0;
+
+    /// <summary>The spreadsheet name of a cell ("D4"), for tables read from a workbook; null otherwise.</summary>
+    public string? CellName(int? row, string? column)
+    {
+        int index = column is null ? -1 : IndexOf(column);
+        if (Sheet is null || row is null || index < 0)
+        {
+            return null;
+        }
+
+        var letters = string.Empty;
+        for (int n = index + 1; n > 0; n = (n - 1) / 26)
+        {
+            letters = (char)('A' + ((n - 1) % 26)) + letters;
+        }
+
+        return letters + row.Value.ToString(CultureInfo.InvariantCulture);
+    }
 
     /// <summary>Parses <paramref name="text"/>; returns null when the file has no header at all.</summary>
     public static CsvTable? Parse(string text, string file, ProblemList problems)

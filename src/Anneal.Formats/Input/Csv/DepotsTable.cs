@@ -29,7 +29,7 @@ internal static class DepotsTable
 
         if (table.Rows.Count == 0)
         {
-            problems.Add(table.File, null, null, null, "no depots", "add at least one depot line under the header");
+            problems.Add(table, null, null, null, "no depots", "add at least one depot line under the header");
         }
 
         return (depots, ids, system);

@@ -13,13 +13,13 @@ internal static class HeaderCheck
             var name = table.Header[i];
             if (name.Length == 0)
             {
-                problems.Add(table.File, 1, null, name, $"column {i + 1} has no name", "name every column in the header, or remove the empty column");
+                problems.Add(table, 1, null, name, $"column {i + 1} has no name", "name every column in the header, or remove the empty column");
                 continue;
             }
 
             if (!seen.TryAdd(name, i))
             {
-                problems.Add(table.File, 1, name, name, $"the column appears twice (columns {seen[name] + 1} and {i + 1})", "keep one of them");
+                problems.Add(table, 1, name, name, $"the column appears twice (columns {seen[name] + 1} and {i + 1})", "keep one of them");
                 continue;
             }
 
@@ -38,7 +38,7 @@ internal static class HeaderCheck
             var fix = near is not null
                 ? $"did you mean '{near}'? Accepted columns: {string.Join(", ", suggestions)}; columns starting with 'note' are ignored"
                 : $"accepted columns: {string.Join(", ", suggestions)}; columns starting with 'note' are ignored";
-            problems.Add(table.File, 1, name, name, "unknown column", fix);
+            problems.Add(table, 1, name, name, "unknown column", fix);
         }
     }
 
@@ -50,7 +50,7 @@ internal static class HeaderCheck
             return true;
         }
 
-        problems.Add(table.File, 1, column, null, $"required column '{column}' is missing", $"add a '{column}' column ({meaning})");
+        problems.Add(table, 1, column, null, $"required column '{column}' is missing", $"add a '{column}' column ({meaning})");
         return false;
     }
 

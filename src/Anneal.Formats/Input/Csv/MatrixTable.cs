@@ -51,11 +51,11 @@ internal static class MatrixTable
         }
 
         problems.AddCapped(unknown, Shown,
-            u => u.Cells.Report(u.Column, u.Id, "unknown stop or depot id", Suggest(u.Id, locations.Keys)),
-            rest => problems.Add(table.File, null, null, null, $"{rest} more lines name unknown ids", "use ids from stops.csv and depots.csv"));
+            u => u.Cells.Report(u.Column, u.Id, "unknown stop or depot id", Suggest(u.Id, locations.Keys, table.Names)),
+            rest => problems.Add(table, null, null, null, $"{rest} more lines name unknown ids", $"use ids from {table.Names.Stops} and {table.Names.Depots}"));
         if (ok)
         {
-            FillReverse(table.File, n, distance, duration, line, names, problems);
+            FillReverse(table, n, distance, duration, line, names, problems);
         }
 
         return (distance, duration);
@@ -94,7 +94,7 @@ internal static class MatrixTable
     }
 
     // A missing (b,a) is taken equal to (a,b); pairs missing both ways are listed.
-    private static void FillReverse(string file, int n, double[] distance, double[] duration, int[] line, IReadOnlyList<string> names, ProblemList problems)
+    private static void FillReverse(CsvTable file, int n, double[] distance, double[] duration, int[] line, IReadOnlyList<string> names, ProblemList problems)
     {
         var missing = new List<(int A, int B)>();
         for (int a = 0; a < n; a++)
@@ -124,9 +124,10 @@ internal static class MatrixTable
             rest => problems.Add(file, null, null, null, $"{rest} more pairs are missing", "give every pair of distinct stops and depots at least in one direction"));
     }
 
-    private static string Suggest(string id, IEnumerable<string> known)
+    private static string Suggest(string id, IEnumerable<string> known, JobNames names)
     {
         var near = Closest.Find(id, known);
-        return near is not null ? $"did you mean '{near}'? Use ids from stops.csv and depots.csv" : "use ids from stops.csv and depots.csv";
+        var use = $"ids from {names.Stops} and {names.Depots}";
+        return near is not null ? $"did you mean '{near}'? Use {use}" : "use " + use;
     }
 }

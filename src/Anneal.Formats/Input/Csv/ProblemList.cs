@@ -12,6 +12,12 @@ internal sealed class ProblemList
     public void Add(string file, int? row, string? column, string? value, string problem, string fix) =>
         _problems.Add(new InputProblem(file, row, column, value, problem, fix));
 
+    public void Add(InputProblem problem) => _problems.Add(problem);
+
+    /// <summary>A problem in <paramref name="table"/>; in a workbook it also names the sheet and, for one cell, the cell.</summary>
+    public void Add(CsvTable table, int? row, string? column, string? value, string problem, string fix) =>
+        _problems.Add(new InputProblem(table.File, row, column, value, problem, fix) { Sheet = table.Sheet, Cell = table.CellName(row, column) });
+
     /// <summary>Reports at most <paramref name="shown"/> items one by one, then one line counting the rest.</summary>
     public void AddCapped<T>(IReadOnlyList<T> items, int shown, Action<T> add, Action<int> addRest)
     {

@@ -48,9 +48,14 @@ internal sealed record SettingsFile
             return new SettingsFile();
         }
 
-        var reader = new SettingsReader(problems);
-        return reader.Top(root);
+        return FromTree(root, (line, key, value, problem, fix) => problems.Add(FileName, line, key, value, problem, fix));
     }
+
+    /// <summary>Where a settings problem goes: the line (or row), the key's path, the value as written, what is wrong, the fix.</summary>
+    public delegate void ProblemSink(int line, string key, string? value, string problem, string fix);
+
+    /// <summary>The settings held by <paramref name="root"/>, an object built from settings.json or from a workbook's settings sheet.</summary>
+    public static SettingsFile FromTree(JsonTree root, ProblemSink sink) => new SettingsReader(sink).Top(root);
 
     private static string Clean(string message)
     {
@@ -58,7 +63,7 @@ internal sealed record SettingsFile
         return cut > 0 ? message[..cut] : message;
     }
 
-    private sealed class SettingsReader(ProblemList problems)
+    private sealed class SettingsReader(ProblemSink sink)
     {
         public SettingsFile Top(JsonTree root)
         {
@@ -299,7 +304,6 @@ internal sealed record SettingsFile
             return result;
         }
 
-        private void Add(int line, string key, string? value, string problem, string fix) =>
-            problems.Add(FileName, line, key, value, problem, fix);
+        private void Add(int line, string key, string? value, string problem, string fix) => sink(line, key, value, problem, fix);
     }
 }

@@ -51,7 +51,7 @@ internal static class StopsTable
                 {
                     var near = Closest.Find(item, vehicleEquipment);
                     cells.Report("needs", item, "no vehicle carries this equipment",
-                        near is not null ? $"did you mean '{near}'? Or add it to a vehicle's equipment in vehicles.csv" : "add it to a vehicle's equipment in vehicles.csv, or remove it from the stop");
+                        near is not null ? $"did you mean '{near}'? Or add it to a vehicle's equipment in {table.Names.Vehicles}" : $"add it to a vehicle's equipment in {table.Names.Vehicles}, or remove it from the stop");
                 }
 
                 needs |= equipment.Bit(item, cells, "needs");
@@ -73,7 +73,7 @@ internal static class StopsTable
 
         if (table.Rows.Count == 0)
         {
-            problems.Add(table.File, null, null, null, "no stops", "add at least one stop line under the header");
+            problems.Add(table, null, null, null, "no stops", "add at least one stop line under the header");
         }
 
         return (stops, ids, system);
@@ -98,8 +98,8 @@ internal static class StopsTable
             if (d < 0 && check)
             {
                 var near = Closest.Find(name, dimensions);
-                problems.Add(table.File, 1, table.Header[index], null, $"no vehicle capacity for dimension '{name}' (vehicles.csv has no capacity_{name} column)",
-                    near is not null ? $"did you mean demand_{near}? Or add capacity_{name} to vehicles.csv" : $"add a capacity_{name} column to vehicles.csv");
+                problems.Add(table, 1, table.Header[index], null, $"no vehicle capacity for dimension '{name}' ({table.Names.Vehicles} has no capacity_{name} column)",
+                    near is not null ? $"did you mean demand_{near}? Or add capacity_{name} to {table.Names.Vehicles}" : $"add a capacity_{name} column to {table.Names.Vehicles}");
             }
         }
 

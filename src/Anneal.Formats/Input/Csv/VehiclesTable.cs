@@ -29,12 +29,12 @@ internal static class VehiclesTable
 
         if (family.Count == 0)
         {
-            problems.Add(table.File, 1, "capacity_<dim>", null, "no capacity column", "add at least one capacity column, e.g. capacity_kg");
+            problems.Add(table, 1, "capacity_<dim>", null, "no capacity column", "add at least one capacity column, e.g. capacity_kg");
         }
 
         if (depotCount > 1 && !table.Has("depot"))
         {
-            problems.Add(table.File, 1, "depot", null, "depots.csv has more than one depot but vehicles.csv has no 'depot' column", "add a 'depot' column naming each vehicle's start depot");
+            problems.Add(table, 1, "depot", null, $"{table.Names.Depots} has more than one depot but {table.Names.Vehicles} has no 'depot' column", "add a 'depot' column naming each vehicle's start depot");
         }
 
         var vehicles = new List<Vehicle>();
@@ -102,7 +102,7 @@ internal static class VehiclesTable
 
         if (table.Rows.Count == 0)
         {
-            problems.Add(table.File, null, null, null, "no vehicles", "add at least one vehicle line under the header");
+            problems.Add(table, null, null, null, "no vehicles", "add at least one vehicle line under the header");
         }
 
         return (vehicles, dimensions);
@@ -132,7 +132,7 @@ internal static class VehiclesTable
         {
             if (depotCount > 1 && column == "depot" && cells.Has(column))
             {
-                cells.Report(column, text, "no start depot given while depots.csv has several", "name the start depot (an id from depots.csv)");
+                cells.Report(column, text, $"no start depot given while {cells.Names.Depots} has several", $"name the start depot (an id from {cells.Names.Depots})");
             }
 
             return fallback;
@@ -146,7 +146,7 @@ internal static class VehiclesTable
         if (depots.Count > 0)
         {
             var near = Closest.Find(text, depots.Ids);
-            cells.Report(column, text, "unknown depot id", near is not null ? $"did you mean '{near}'? Use an id from depots.csv" : "use an id from depots.csv");
+            cells.Report(column, text, "unknown depot id", near is not null ? $"did you mean '{near}'? Use an id from {cells.Names.Depots}" : $"use an id from {cells.Names.Depots}");
         }
 
         return fallback;

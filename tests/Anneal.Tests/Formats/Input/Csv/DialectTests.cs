@@ -119,6 +119,20 @@ public class DialectTests
     }
 
     [Fact]
+    public void A_file_saved_in_windows_1252_keeps_its_accents()
+    {
+        using var job = Job(";", DecimalComma);
+        System.Text.Encoding.RegisterProvider(System.Text.CodePagesEncodingProvider.Instance);
+        var latin = System.Text.Encoding.GetEncoding(1252); // the code page of Western European spreadsheet "CSV" saves
+        File.WriteAllBytes(Path.Combine(job.Path, "depots.csv"), latin.GetBytes("id;x;y\nCafé Entrepôt;0,5;0\n"));
+
+        var loaded = CsvJobReader.Read(job.Path);
+
+        Assert.Equal("Café Entrepôt", loaded.Instance.Depots[0].Id);
+        Assert.Contains("depots.csv semicolon-separated, decimal commas, Windows-1252", loaded.ReadAs, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void Check_says_which_dialect_it_read()
     {
         using var semicolon = Job(";", DecimalComma);
