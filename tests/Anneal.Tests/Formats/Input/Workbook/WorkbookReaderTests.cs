@@ -1,10 +1,10 @@
 using Anneal.Cli;
 using Anneal.Core.Model;
 using Anneal.Formats.Input;
-using Anneal.Tests.Formats.Csv;
-using Anneal.Tests.Output;
+using Anneal.Tests.Formats.Input.Csv;
+using Anneal.Tests.Fixtures;
 
-namespace Anneal.Tests.Formats.Workbook;
+namespace Anneal.Tests.Formats.Input.Workbook;
 
 /// <summary>
 /// A job held as a workbook (sheets stops, depots, vehicles, settings), written by the Open XML SDK with cells typed

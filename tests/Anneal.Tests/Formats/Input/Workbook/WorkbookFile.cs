@@ -2,7 +2,7 @@ using DocumentFormat.OpenXml;
 using DocumentFormat.OpenXml.Packaging;
 using DocumentFormat.OpenXml.Spreadsheet;
 
-namespace Anneal.Tests.Formats.Workbook;
+namespace Anneal.Tests.Formats.Input.Workbook;
 
 /// <summary>A time-typed cell: the number of days (a fraction for a time of day), shown with a time format.</summary>
 internal sealed record TimeCell(double Days, bool Hours = false)
