@@ -39,6 +39,7 @@ public sealed class ExactModel
     {
         _instance = instance;
         (Scale, SamePlans) = ExactScale(instance);
+        ScalingGuard.Ensure(instance, Scale);
         _classes = VehicleClass.Group(instance);
         int n = instance.StopCount;
         _arc = new ILiteral?[_classes.Count][,];

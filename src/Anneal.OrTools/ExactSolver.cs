@@ -36,7 +36,15 @@ public sealed class ExactSolver : ISolver
 
         // The bound's vehicle count and objective bound go into the model, so that CP-SAT's proof starts from them.
         var hints = Bounds.BoundSolver.Hints(instance, TimeSpan.FromSeconds(Math.Min(2, 0.2 * options.TimeLimit.TotalSeconds)), cancel);
-        var exact = new ExactModel(instance, hints);
+        ExactModel exact;
+        try
+        {
+            exact = new ExactModel(instance, hints);
+        }
+        catch (ScalingDeclinedException e)
+        {
+            return ScalingGuard.Declined(Name, e);
+        }
         var trace = new TraceRecorder(progress, options.TimeLimit.TotalSeconds);
         var keeper = new Keeper(instance, exact, trace, clock);
         var solver = new CpSolver();

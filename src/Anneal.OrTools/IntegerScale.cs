@@ -44,6 +44,12 @@ public sealed class IntegerScale
     /// <summary>Largest relative change rounding made to a cost rate so far (0 when every rate was whole).</summary>
     public double MaxRateError { get; private set; }
 
+    /// <summary><see cref="Horizon"/> before the cast to an integer (infinite or huge when a time is), for <see cref="ScalingGuard"/>.</summary>
+    public double HorizonSteps { get; }
+
+    /// <summary>A generous bound on any plan's objective, in objective units (infinite when a price or distance is), for <see cref="ScalingGuard"/>.</summary>
+    public double ObjectiveBound { get; }
+
     /// <summary>Rounding that changed a cost rate noticeably ("approximated: ...").</summary>
     public IReadOnlyList<string> Notes => _notes;
 
@@ -56,8 +62,10 @@ public sealed class IntegerScale
         TimeScale = timeScale;
         LoadScale = loadScale;
         Origin = EarliestTime(instance);
-        Horizon = (long)Math.Ceiling((LatestTime(instance) - Origin) * TimeScale) + 1;
-        double bound = ObjectiveBound(instance);
+        HorizonSteps = Math.Ceiling((LatestTime(instance) - Origin) * TimeScale) + 1;
+        Horizon = HorizonSteps < long.MaxValue / 2 ? (long)HorizonSteps : long.MaxValue / 2;
+        double bound = Bound(instance);
+        ObjectiveBound = bound;
         double scale = maxCostScale;
         while (scale > 1 && bound * scale > MaxTotal)
         {
@@ -207,7 +215,7 @@ public sealed class IntegerScale
     }
 
     /// <summary>A generous objective: every vehicle's fixed cost, every stop on its own return trip at the dearest rates, every penalty.</summary>
-    private static double ObjectiveBound(Instance inst)
+    private static double Bound(Instance inst)
     {
         double rate = 1, hourly = 0, fixedCost = 0;
         foreach (var v in inst.Vehicles)
@@ -238,6 +246,6 @@ public sealed class IntegerScale
 
         double span = LatestTime(inst) - EarliestTime(inst);
         bound += span * (hourly + softTime) * Math.Max(1, inst.StopCount);
-        return double.IsFinite(bound) ? bound : MaxTotal;
+        return double.IsNaN(bound) ? double.PositiveInfinity : bound;
     }
 }

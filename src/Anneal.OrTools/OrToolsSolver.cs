@@ -25,8 +25,19 @@ public sealed class OrToolsSolver : ISolver
 
     public string? Declines(Instance instance) => null;
 
-    public SolverResult Solve(Instance instance, SolveOptions options, IProgress<TracePoint>? progress, CancellationToken cancel) =>
-        Run(instance, options, progress, cancel).Result;
+    public SolverResult Solve(Instance instance, SolveOptions options, IProgress<TracePoint>? progress, CancellationToken cancel)
+    {
+        try
+        {
+            return Run(instance, options, progress, cancel).Result;
+        }
+        catch (ScalingDeclinedException e)
+        {
+            return ScalingGuard.Declined(Name, e);
+        }
+    }
+
+    /// <exception cref="ScalingDeclinedException">when the model does not fit OR-Tools' integers (see <see cref="ScalingGuard"/>).</exception>
 
     public OrToolsRun Run(Instance instance, SolveOptions options, IProgress<TracePoint>? progress, CancellationToken cancel)
     {

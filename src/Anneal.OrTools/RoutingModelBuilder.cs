@@ -14,6 +14,7 @@ public static class RoutingModelBuilder
     public static RoutingMapping Build(Instance instance)
     {
         var scale = new IntegerScale(instance);
+        ScalingGuard.Ensure(instance, scale);
         var notes = new List<string>(ScheduleApproximations.For(instance));
         int n = instance.StopCount;
         var nodeLocation = NodeLocations(instance);
