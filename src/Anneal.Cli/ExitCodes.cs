@@ -9,6 +9,9 @@ public static class ExitCodes
     public const int Infeasible = 3;
     public const int OutputFailed = 4;
 
+    /// <summary>The queue's database cannot be reached, holds no queue, or is at another schema version.</summary>
+    public const int QueueUnavailable = 5;
+
     /// <summary>128 + SIGINT, the shell convention for a run stopped by Ctrl+C.</summary>
     public const int Interrupted = 130;
 }

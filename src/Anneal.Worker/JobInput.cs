@@ -13,28 +13,32 @@ public static class JobInput
         Path.Combine(Path.GetDirectoryName(job.Path)!, ".unzipped-" + job.Entry.Name);
 
     /// <exception cref="InputException">when a .zip cannot be opened.</exception>
-    public static string Locate(ClaimedJob job)
+    public static string Locate(ClaimedJob job) => Locate(job.Path, job.Entry.IsFolder, job.Entry.Name, ScratchFor(job));
+
+    /// <summary>What to load for an entry at <paramref name="path"/>; a .zip is unpacked into <paramref name="scratch"/> first.</summary>
+    /// <param name="name">The entry's name as the user gave it, for messages.</param>
+    /// <exception cref="InputException">when a .zip cannot be opened.</exception>
+    public static string Locate(string path, bool isFolder, string name, string scratch)
     {
-        if (job.Entry.IsFolder)
+        if (isFolder)
         {
-            return Within(job.Path);
+            return Within(path);
         }
 
-        if (!job.Entry.Extension.Equals(".zip", StringComparison.OrdinalIgnoreCase))
+        if (!Path.GetExtension(path).Equals(".zip", StringComparison.OrdinalIgnoreCase))
         {
-            return job.Path;
+            return path;
         }
 
-        string scratch = ScratchFor(job);
         try
         {
             Entries.TryDelete(scratch);
             // The extractor refuses entries that would land outside the folder ("zip slip").
-            ZipFile.ExtractToDirectory(job.Path, scratch);
+            ZipFile.ExtractToDirectory(path, scratch);
         }
         catch (Exception e) when (e is IOException or InvalidDataException or UnauthorizedAccessException)
         {
-            throw new InputException(new InputProblem(job.Entry.Name, null, null, null, "the .zip cannot be opened: " + e.Message,
+            throw new InputException(new InputProblem(name, null, null, null, "the .zip cannot be opened: " + e.Message,
                 "zip the job folder again (stops.csv, depots.csv, vehicles.csv at its top or in one folder), or drop the folder itself"));
         }
 

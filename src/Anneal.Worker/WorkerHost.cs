@@ -17,16 +17,19 @@ public static class WorkerHost
     public const string SettingsFile = "appsettings.json";
     public const string EnvironmentPrefix = "ANNEAL_";
 
+    /// <summary>The settings files and variables every Anneal host reads, in order (later ones win); the command line goes last.</summary>
+    public static IConfigurationBuilder AddSettingsSources(IConfigurationBuilder configuration) =>
+        configuration
+            .AddJsonFile(Path.Combine(AppContext.BaseDirectory, SettingsFile), optional: true, reloadOnChange: false)
+            .AddJsonFile(Path.Combine(Environment.CurrentDirectory, SettingsFile), optional: true, reloadOnChange: false)
+            .AddEnvironmentVariables(EnvironmentPrefix);
+
     /// <param name="commandLine">Settings given on the command line, as configuration keys (e.g. "Worker:Inbox").</param>
     /// <param name="addAnneal">Registers the solvers and run writers, as the host wants them (<c>s => s.AddAnneal().AddOrTools()</c>).</param>
     public static IHost Build(IReadOnlyDictionary<string, string?> commandLine, WorkerRun run, Action<IServiceCollection> addAnneal)
     {
         var builder = Host.CreateEmptyApplicationBuilder(new HostApplicationBuilderSettings { ContentRootPath = Environment.CurrentDirectory });
-        builder.Configuration
-            .AddJsonFile(Path.Combine(AppContext.BaseDirectory, SettingsFile), optional: true, reloadOnChange: false)
-            .AddJsonFile(Path.Combine(Environment.CurrentDirectory, SettingsFile), optional: true, reloadOnChange: false)
-            .AddEnvironmentVariables(EnvironmentPrefix)
-            .AddInMemoryCollection(commandLine);
+        AddSettingsSources(builder.Configuration).AddInMemoryCollection(commandLine);
 
         builder.Logging.SetMinimumLevel(LogLevel.Information);
         builder.Logging.AddFilter("Microsoft", LogLevel.Warning);

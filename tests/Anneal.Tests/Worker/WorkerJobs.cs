@@ -21,16 +21,32 @@ internal static class WorkerJobs
     public static void DropBadShift(string root, string name) =>
         Drop(root, name, Stops(8), Vehicles().Replace("07:00", "7 o'clock", StringComparison.Ordinal));
 
+    /// <summary>A valid job written as the folder <paramref name="folder"/> (for `anneal queue submit`).</summary>
+    public static string WriteValid(string folder, int seed) => Write(folder, Stops(seed), Vehicles());
+
+    /// <summary>Like <see cref="DropBadDemand"/>, written as the folder <paramref name="folder"/>.</summary>
+    public static string WriteBadDemand(string folder)
+    {
+        var lines = Stops(7).Split('\n');
+        lines[2] = lines[2].Replace(",12,", ",lots,", StringComparison.Ordinal);
+        return Write(folder, string.Join('\n', lines), Vehicles());
+    }
+
     /// <summary>Writes the job in a staging folder, then renames it into the inbox so the worker never sees half a job.</summary>
     private static void Drop(string root, string name, string stops, string vehicles)
     {
-        string staging = Path.Combine(root, "staging", name);
-        Directory.CreateDirectory(staging);
-        File.WriteAllText(Path.Combine(staging, "depots.csv"), "id,x,y\nD,0,0\n");
-        File.WriteAllText(Path.Combine(staging, "stops.csv"), stops);
-        File.WriteAllText(Path.Combine(staging, "vehicles.csv"), vehicles);
+        string staging = Write(Path.Combine(root, "staging", name), stops, vehicles);
         Directory.CreateDirectory(Path.Combine(root, "inbox"));
         Directory.Move(staging, Path.Combine(root, "inbox", name));
+    }
+
+    private static string Write(string folder, string stops, string vehicles)
+    {
+        Directory.CreateDirectory(folder);
+        File.WriteAllText(Path.Combine(folder, "depots.csv"), "id,x,y\nD,0,0\n");
+        File.WriteAllText(Path.Combine(folder, "stops.csv"), stops);
+        File.WriteAllText(Path.Combine(folder, "vehicles.csv"), vehicles);
+        return folder;
     }
 
     private static string Stops(int seed)
