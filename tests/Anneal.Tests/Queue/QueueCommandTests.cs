@@ -1,6 +1,7 @@
 using System.IO.Compression;
 using Anneal.Cli;
 using Anneal.Cli.Commands;
+using Anneal.Tests.Fixtures;
 using Anneal.Tests.Worker;
 
 namespace Anneal.Tests.Queue;

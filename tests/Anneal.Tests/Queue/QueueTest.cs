@@ -1,6 +1,6 @@
 using System.Text.Json;
 using Anneal.Cli;
-using Anneal.Tests.Output;
+using Anneal.Tests.Fixtures;
 using Npgsql;
 
 namespace Anneal.Tests.Queue;
