@@ -1,3 +1,4 @@
+using Anneal.Core.Evaluation;
 using Anneal.Core.Model;
 using Anneal.Core.Plans;
 using Google.OrTools.Sat;
@@ -193,14 +194,7 @@ public sealed class ExactModel
         int n = inst.StopCount;
         int home = inst.DepotLocation(v.StartDepot);
         int end = inst.DepotLocation(v.EndDepot);
-        double rate = inst.Objective == Objective.Cost ? v.CostPerDistance : 1;
-        double fixedCost = inst.Objective switch
-        {
-            Objective.Cost => v.FixedCost,
-            Objective.VehiclesThenDistance => inst.VehicleWeight,
-            _ => 0,
-        };
-        double hourly = inst.Objective == Objective.Cost ? v.CostPerHour / inst.TimeUnitsPerHour : 0;
+        var (fixedCost, rate, hourly) = CostTable.RatesOf(inst, v);
         bool durationMatters = hourly > 0 || !double.IsPositiveInfinity(v.MaxDuration);
         var arcs = new ILiteral?[n + 1, n + 1];
         _arc[c] = arcs;

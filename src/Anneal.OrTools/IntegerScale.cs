@@ -218,11 +218,12 @@ public sealed class IntegerScale
     private static double Bound(Instance inst)
     {
         double rate = 1, hourly = 0, fixedCost = 0;
-        foreach (var v in inst.Vehicles)
+        for (int k = 0; k < inst.Vehicles.Count; k++)
         {
-            rate = Math.Max(rate, v.CostPerDistance);
-            hourly = Math.Max(hourly, v.CostPerHour / inst.TimeUnitsPerHour);
-            fixedCost += inst.Objective == Objective.VehiclesThenDistance ? inst.VehicleWeight : v.FixedCost;
+            var rates = inst.Costs.Rates(k);
+            rate = Math.Max(rate, rates.PerDistance);
+            hourly = Math.Max(hourly, rates.PerTime);
+            fixedCost += rates.Fixed;
         }
 
         double bound = fixedCost + 1;

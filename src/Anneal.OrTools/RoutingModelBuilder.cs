@@ -34,13 +34,7 @@ public static class RoutingModelBuilder
         Loads(instance, scale, model, nodeLocation);
         for (int v = 0; v < vehicles; v++)
         {
-            double fixedCost = instance.Objective switch
-            {
-                Objective.Cost => instance.Vehicles[v].FixedCost,
-                Objective.VehiclesThenDistance => instance.VehicleWeight,
-                _ => 0,
-            };
-            model.SetFixedCostOfVehicle(scale.Cost(fixedCost), v);
+            model.SetFixedCostOfVehicle(scale.Cost(instance.Costs.Rates(v).Fixed), v);
         }
 
         Visits(instance, scale, model, manager, notes);
@@ -118,9 +112,9 @@ public static class RoutingModelBuilder
                 }
             }
 
-            if (instance.Objective == Objective.Cost && vehicle.CostPerHour > 0)
+            if (instance.Costs.Rates(v).PerTime is > 0 and var hourly)
             {
-                time.SetSpanCostCoefficientForVehicle(scale.PerTimeStep(vehicle.CostPerHour / instance.TimeUnitsPerHour, "cost per hour"), v);
+                time.SetSpanCostCoefficientForVehicle(scale.PerTimeStep(hourly, "cost per hour"), v);
             }
 
             if (!double.IsPositiveInfinity(vehicle.MaxDuration))

@@ -15,9 +15,10 @@ public static class ScheduleApproximations
     {
         bool durationMatters = false;
         double timePrice = instance.Rules.MaxDuration.Hard ? 0 : instance.Rules.MaxDuration.Price;
-        foreach (var v in instance.Vehicles)
+        for (int k = 0; k < instance.Vehicles.Count; k++)
         {
-            double hourly = instance.Objective == Objective.Cost ? v.CostPerHour / instance.TimeUnitsPerHour : 0;
+            var v = instance.Vehicles[k];
+            double hourly = instance.Costs.Rates(k).PerTime;
             durationMatters |= hourly > 0 || !double.IsPositiveInfinity(v.MaxDuration);
             timePrice = Math.Max(timePrice, hourly + (instance.Rules.MaxDuration.Hard ? 0 : instance.Rules.MaxDuration.Price));
         }

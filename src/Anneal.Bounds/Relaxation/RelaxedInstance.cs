@@ -1,4 +1,5 @@
 using System.Globalization;
+using Anneal.Core.Evaluation;
 using Anneal.Core.Model;
 using Anneal.Bounds.Safety;
 
@@ -206,12 +207,7 @@ public sealed class RelaxedInstance
         }
 
         double latest = rules.ShiftEnd.Hard ? Tolerance.Widen(v.ShiftEnd) : double.PositiveInfinity;
-        var (fixedCost, perDistance, perTime) = instance.Objective switch
-        {
-            Objective.Cost => (v.FixedCost, v.CostPerDistance, v.CostPerHour / instance.TimeUnitsPerHour),
-            Objective.Distance => (0.0, 1.0, 0.0),
-            _ => (instance.VehicleWeight, 1.0, 0.0),
-        };
+        var (fixedCost, perDistance, perTime) = CostTable.RatesOf(instance, v);
         var kind = new RouteKind
         {
             Count = count,

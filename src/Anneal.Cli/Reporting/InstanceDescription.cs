@@ -17,7 +17,7 @@ public static class InstanceDescription
     public static string Rules(Instance instance)
     {
         var r = instance.Rules;
-        string unit = string.IsNullOrEmpty(instance.TimeUnit) ? "time unit" : instance.TimeUnit;
+        string unit = instance.Units.TimeWord;
         var hard = new List<string>();
         var soft = new List<string>();
         Sort("time windows", r.TimeWindows, "per " + unit + " late");

@@ -16,8 +16,8 @@ public static class PlanReport
             hardCount += v.Hard ? 1 : 0;
         }
 
-        string unit = instance.TimeUnit == "min" ? " km" : string.Empty;
-        string timeUnit = string.IsNullOrEmpty(instance.TimeUnit) ? string.Empty : " " + instance.TimeUnit;
+        string unit = instance.Units.DistanceSuffix;
+        string timeUnit = instance.Units.TimeSuffix;
         w.WriteLine(e.Feasible ? "Plan: feasible (breaks no hard rule)" : $"Plan: INFEASIBLE (breaks {InstanceDescription.Plural(hardCount, "hard rule")})");
         w.WriteLine(Line("objective", $"{Num(e.Objective)} ({instance.Objective.ToText()})"));
         w.WriteLine(Line("  made of", Breakdown(e.Breakdown)));
@@ -36,7 +36,7 @@ public static class PlanReport
             w.WriteLine($"Violations ({e.Violations.Count}):");
             foreach (var v in e.Violations)
             {
-                w.WriteLine($"  {(v.Hard ? "hard" : "soft")}  {v.Rule,-13} {v.Message}");
+                w.WriteLine($"  {(v.Hard ? "hard" : "soft")}  {v.Rule.ToText(),-13} {v.Message}");
             }
         }
 

@@ -31,21 +31,8 @@ public sealed class CostTable
         for (int k = 0; k < count; k++)
         {
             var v = instance.Vehicles[k];
-            switch (instance.Objective)
-            {
-                case Objective.Cost:
-                    Base[k] = v.FixedCost;
-                    PerDistance[k] = v.CostPerDistance;
-                    PerTime[k] = v.CostPerHour / instance.TimeUnitsPerHour;
-                    break;
-                case Objective.Distance:
-                    PerDistance[k] = 1;
-                    break;
-                default:
-                    Base[k] = instance.VehicleWeight;
-                    PerDistance[k] = 1;
-                    break;
-            }
+            (Base[k], PerDistance[k], PerTime[k]) = RatesOf(instance, v);
+            VehiclesCost |= Base[k] > 0;
 
             _shiftEnd[k] = v.ShiftEnd;
             _maxDuration[k] = v.MaxDuration;
@@ -59,6 +46,24 @@ public sealed class CostTable
         (SoftDuration, HardDuration) = Split(rules.MaxDuration);
     }
 
+    /// <summary>True when using a vehicle costs something (fixed costs, or vehicles-then-distance): fewer routes pay.</summary>
+    public bool VehiclesCost { get; }
+
+    /// <summary>What vehicle <paramref name="vehicle"/> costs under the objective.</summary>
+    public VehicleRates Rates(int vehicle) => new(Base[vehicle], PerDistance[vehicle], PerTime[vehicle]);
+
+    /// <summary>
+    /// The objective's price of a vehicle, the one place it is decided: under cost its fixed cost, cost per distance
+    /// and per time unit; under distance only the distance; under vehicles-then-distance the vehicle count's weight
+    /// (<see cref="Instance.VehicleWeight"/>) and the distance.
+    /// </summary>
+    public static VehicleRates RatesOf(Instance instance, Vehicle v) => instance.Objective switch
+    {
+        Objective.Cost => new(v.FixedCost, v.CostPerDistance, v.CostPerHour / instance.Units.TimePerHour),
+        Objective.Distance => new(0, 1, 0),
+        _ => new(instance.VehicleWeight, 1, 0),
+    };
+
     public double ShiftEnd(int vehicle) => _shiftEnd[vehicle];
 
     public double MaxDuration(int vehicle) => _maxDuration[vehicle];
@@ -67,3 +72,6 @@ public sealed class CostTable
 
     private static (double Soft, double Hard) Split(Rule rule) => rule.Hard ? (0, 1) : (rule.Price, 0);
 }
+
+/// <summary>A vehicle's price under the objective: for being used, per distance unit, per time unit of route duration.</summary>
+public readonly record struct VehicleRates(double Fixed, double PerDistance, double PerTime);

@@ -20,7 +20,7 @@ public sealed record CostBreakdown
 }
 
 /// <summary>A broken rule: which rule, where, by how much, in words.</summary>
-public sealed record Violation(string Rule, bool Hard, string? Vehicle, string? Stop, double Amount, string Message);
+public sealed record Violation(RuleKind Rule, bool Hard, string? Vehicle, string? Stop, double Amount, string Message);
 
 public sealed record RouteEvaluation(
     int Vehicle,

@@ -23,9 +23,9 @@ public static class PlanEvaluator
         double fixedCost = 0, distanceCost = 0, timeCost = 0, vehicles = 0, lateness = 0, overload = 0, overtime = 0, durationExcess = 0;
         int dims = instance.DimensionCount;
 
+        var costs = instance.Costs;
         foreach (var route in plan.Routes)
         {
-            var v = instance.Vehicles[route.Vehicle];
             var visits = new VisitTimes[route.Stops.Length];
             var m = RouteScheduler.Schedule(instance, route.Vehicle, route.Stops, visits);
             var loads = LoadsAfter(instance, route.Stops);
@@ -41,21 +41,19 @@ public static class PlanEvaluator
                 continue;
             }
 
-            switch (instance.Objective)
+            // The cost model's rates; a vehicle's price is a fixed cost, or under vehicles-then-distance the vehicle count's weight.
+            var rates = costs.Rates(route.Vehicle);
+            if (instance.Objective == Objective.VehiclesThenDistance)
             {
-                case Objective.Cost:
-                    fixedCost += v.FixedCost;
-                    distanceCost += m.Distance * v.CostPerDistance;
-                    timeCost += m.Duration / instance.TimeUnitsPerHour * v.CostPerHour;
-                    break;
-                case Objective.Distance:
-                    distanceCost += m.Distance;
-                    break;
-                default:
-                    vehicles += instance.VehicleWeight;
-                    distanceCost += m.Distance;
-                    break;
+                vehicles += rates.Fixed;
             }
+            else
+            {
+                fixedCost += rates.Fixed;
+            }
+
+            distanceCost += m.Distance * rates.PerDistance;
+            timeCost += m.Duration * rates.PerTime;
 
             if (!rules.TimeWindows.Hard)
             {
@@ -92,7 +90,7 @@ public static class PlanEvaluator
             unserved.Add(s);
             unservedCost += CostModel.UnservedObjective(instance, s);
             bool mayDrop = instance.MayDrop(s);
-            violations.Add(new Violation("unserved", !mayDrop, null, instance.Stops[s].Id, 1,
+            violations.Add(new Violation(RuleKind.Unserved, !mayDrop, null, instance.Stops[s].Id, 1,
                 mayDrop
                     ? $"stop {instance.Stops[s].Id} is left unserved (penalty {instance.UnservedPrice(s):0.##})"
                     : $"stop {instance.Stops[s].Id} must be served but is on no route"));
@@ -169,14 +167,14 @@ public static class PlanEvaluator
     {
         var rules = instance.Rules;
         var v = instance.Vehicles[route.Vehicle];
-        string unit = string.IsNullOrEmpty(instance.TimeUnit) ? "time units" : instance.TimeUnit;
+        string unit = instance.Units.TimeWords;
         for (int k = 0; k < route.Stops.Length; k++)
         {
             if (visits[k].Late > Tolerance)
             {
                 var stop = instance.Stops[route.Stops[k]];
                 string how = rules.TimeWindows.Hard ? "arrives after its window closes" : "is served late";
-                violations.Add(new Violation("time-window", rules.TimeWindows.Hard, v.Id, stop.Id, visits[k].Late,
+                violations.Add(new Violation(RuleKind.TimeWindow, rules.TimeWindows.Hard, v.Id, stop.Id, visits[k].Late,
                     $"stop {stop.Id} {how} by {visits[k].Late:0.##} {unit} (vehicle {v.Id}, position {k + 1})"));
             }
 
@@ -184,26 +182,26 @@ public static class PlanEvaluator
             if (missing != 0)
             {
                 var stop = instance.Stops[route.Stops[k]];
-                violations.Add(new Violation("equipment", true, v.Id, stop.Id, System.Numerics.BitOperations.PopCount(missing),
+                violations.Add(new Violation(RuleKind.Equipment, true, v.Id, stop.Id, System.Numerics.BitOperations.PopCount(missing),
                     $"stop {stop.Id} needs {EquipmentList(instance, missing)}, which vehicle {v.Id} lacks"));
             }
         }
 
         if (m.Overload > Tolerance)
         {
-            violations.Add(new Violation("capacity", rules.Capacity.Hard, v.Id, null, m.Overload,
+            violations.Add(new Violation(RuleKind.Capacity, rules.Capacity.Hard, v.Id, null, m.Overload,
                 $"vehicle {v.Id} is loaded {m.Overload:0.##} units over its capacity"));
         }
 
         if (m.Overtime > Tolerance)
         {
-            violations.Add(new Violation("shift-end", rules.ShiftEnd.Hard, v.Id, null, m.Overtime,
+            violations.Add(new Violation(RuleKind.ShiftEnd, rules.ShiftEnd.Hard, v.Id, null, m.Overtime,
                 $"vehicle {v.Id} returns {m.Overtime:0.##} {unit} after its shift ends"));
         }
 
         if (m.DurationExcess > Tolerance)
         {
-            violations.Add(new Violation("max-duration", rules.MaxDuration.Hard, v.Id, null, m.DurationExcess,
+            violations.Add(new Violation(RuleKind.MaxDuration, rules.MaxDuration.Hard, v.Id, null, m.DurationExcess,
                 $"route of vehicle {v.Id} lasts {m.DurationExcess:0.##} {unit} longer than allowed"));
         }
     }

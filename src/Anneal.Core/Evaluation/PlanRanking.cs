@@ -89,7 +89,7 @@ public static class PlanRanking
                 continue;
             }
 
-            if (v.Rule == "unserved")
+            if (v.Rule == RuleKind.Unserved)
             {
                 missed++;
             }

@@ -18,11 +18,8 @@ public sealed class Instance
     public Objective Objective { get; }
     public TravelTable Travel { get; }
 
-    /// <summary>Label of the time unit ("min" for CSV jobs, "" for benchmark units).</summary>
-    public string TimeUnit { get; }
-
-    /// <summary>Time units in one hour; converts durations for the per-hour cost.</summary>
-    public double TimeUnitsPerHour { get; }
+    /// <summary>How times and distances are measured and read (minutes and km for CSV jobs, plain numbers for benchmark files).</summary>
+    public Units Units { get; }
 
     public int StopCount { get; }
     public int DimensionCount { get; }
@@ -51,8 +48,7 @@ public sealed class Instance
         RuleSet rules,
         Objective objective,
         TravelTable travel,
-        string timeUnit = "",
-        double timeUnitsPerHour = 60.0)
+        Units? units = null)
     {
         Name = name;
         Stops = stops;
@@ -63,8 +59,7 @@ public sealed class Instance
         Rules = rules;
         Objective = objective;
         Travel = travel;
-        TimeUnit = timeUnit;
-        TimeUnitsPerHour = timeUnitsPerHour;
+        Units = units ?? Units.Plain;
         StopCount = stops.Count;
         DimensionCount = dimensionNames.Count;
         if (travel.Count != stops.Count + depots.Count)
@@ -154,5 +149,5 @@ public sealed class Instance
 
     /// <summary>Same instance with another objective or rule set (used by benchmarks and tests).</summary>
     public Instance With(Objective? objective = null, RuleSet? rules = null, IReadOnlyList<Vehicle>? vehicles = null) =>
-        new(Name, Stops, Depots, vehicles ?? Vehicles, DimensionNames, EquipmentNames, rules ?? Rules, objective ?? Objective, Travel, TimeUnit, TimeUnitsPerHour);
+        new(Name, Stops, Depots, vehicles ?? Vehicles, DimensionNames, EquipmentNames, rules ?? Rules, objective ?? Objective, Travel, Units);
 }

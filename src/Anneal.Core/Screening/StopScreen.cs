@@ -158,7 +158,8 @@ public static class StopScreen
 
     private static string Reason(Instance instance, int s, ScreenCheck check)
     {
-        string unit = instance.TimeUnit;
+        var units = instance.Units;
+        string Clock(double t) => double.IsPositiveInfinity(t) ? "never" : units.Format(t);
         switch (check)
         {
             case ScreenCheck.Capacity:
@@ -167,14 +168,14 @@ public static class StopScreen
                 return $"needs {EquipmentList(instance, instance.Stops[s].Needs)} and no single vehicle offers all of them";
             case ScreenCheck.Window:
                 double arrival = Best(instance, v => EarliestArrival(instance, s, v), out _);
-                return $"the earliest any vehicle can arrive is {TimeLabel.Format(arrival, unit)}, after its last window closes at {TimeLabel.Format(instance.Hull(s).Close, unit)}";
+                return $"the earliest any vehicle can arrive is {Clock(arrival)}, after its last window closes at {Clock(instance.Hull(s).Close)}";
             case ScreenCheck.ShiftEnd:
                 Best(instance, v => EarliestReturn(instance, s, v) - instance.Vehicles[v].ShiftEnd, out int bv);
                 return $"service cannot end in time to return to the end depot by the shift end: vehicle {instance.Vehicles[bv].Id} would be back at the earliest at "
-                    + $"{TimeLabel.Format(EarliestReturn(instance, s, bv), unit)}, its shift ends at {TimeLabel.Format(instance.Vehicles[bv].ShiftEnd, unit)}";
+                    + $"{Clock(EarliestReturn(instance, s, bv))}, its shift ends at {Clock(instance.Vehicles[bv].ShiftEnd)}";
             default:
                 Best(instance, v => ShortestRoute(instance, s, v) - instance.Vehicles[v].MaxDuration, out int dv);
-                string suffix = unit.Length > 0 ? " " + unit : string.Empty;
+                string suffix = units.TimeSuffix;
                 return $"a route serving only this stop takes {Number(ShortestRoute(instance, s, dv))}{suffix}, more than the maximum duration "
                     + $"{Number(instance.Vehicles[dv].MaxDuration)}{suffix} of vehicle {instance.Vehicles[dv].Id}";
         }

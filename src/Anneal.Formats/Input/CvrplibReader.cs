@@ -404,6 +404,6 @@ public static class CvrplibReader
         }
 
         return new Instance(spec.Name ?? Path.GetFileName(fileName), stops, depots, vehicles, ["demand"], [], RuleSet.AllHard, Objective.Distance,
-            TravelTable.Planar(x, y, roundToInteger: true), timeUnit: "");
+            TravelTable.Planar(x, y, roundToInteger: true), Units.Plain);
     }
 }

@@ -270,7 +270,7 @@ public static class SolomonReader
         }
 
         return new Instance(NameOf(lines, fileName), stops, depots, vehicles, ["demand"], [], RuleSet.AllHard, Objective.Distance,
-            TravelTable.Planar(x, y, roundToInteger: false), timeUnit: "");
+            TravelTable.Planar(x, y, roundToInteger: false), Units.Plain);
     }
 
     private static string NameOf(List<TextLine> lines, string fileName)

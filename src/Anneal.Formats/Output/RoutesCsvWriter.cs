@@ -36,9 +36,9 @@ public static class RoutesCsvWriter
                 csv.WriteField(vehicle);
                 csv.WriteField((k + 1).ToString(CultureInfo.InvariantCulture));
                 csv.WriteField(stop.Id);
-                csv.WriteField(TimeText.Clock(instance, visit.Arrival));
-                csv.WriteField(TimeText.Clock(instance, visit.Start));
-                csv.WriteField(TimeText.Clock(instance, visit.Departure));
+                csv.WriteField(instance.Units.Format(visit.Arrival));
+                csv.WriteField(instance.Units.Format(visit.Start));
+                csv.WriteField(instance.Units.Format(visit.Departure));
                 csv.WriteField(TimeText.Number(visit.Wait));
                 csv.WriteField(TimeText.Number(visit.Late));
                 csv.WriteField(TimeText.Window(instance, WindowUsed(stop, visit.Arrival)));

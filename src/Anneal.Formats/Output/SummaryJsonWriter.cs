@@ -36,7 +36,7 @@ public static class SummaryJsonWriter
         var violations = new List<ViolationSummary>(evaluation.Violations.Count);
         foreach (var v in evaluation.Violations)
         {
-            violations.Add(new ViolationSummary(v.Rule, v.Hard, v.Vehicle, v.Stop, v.Amount, v.Message));
+            violations.Add(new ViolationSummary(v.Rule.ToText(), v.Hard, v.Vehicle, v.Stop, v.Amount, v.Message));
         }
 
         return new PlanSummary(

@@ -1,4 +1,5 @@
 using System.Text;
+using Anneal.Core.Evaluation;
 using Anneal.Core.Screening;
 using static Anneal.Reports.Html.Text;
 
@@ -9,8 +10,8 @@ internal static class ProblemLists
 {
     public static void Broken(StringBuilder h, ReportInput input)
     {
-        var hard = input.Plan.Violations.Where(v => v.Hard && v.Rule != "unserved").ToList();
-        var soft = input.Plan.Violations.Where(v => !v.Hard && v.Rule != "unserved").ToList();
+        var hard = input.Plan.Violations.Where(v => v.Hard && v.Rule != RuleKind.Unserved).ToList();
+        var soft = input.Plan.Violations.Where(v => !v.Hard && v.Rule != RuleKind.Unserved).ToList();
         if (hard.Count == 0 && soft.Count == 0)
         {
             h.Append("<p class=\"ok\">No rule is broken.</p>");
@@ -19,7 +20,7 @@ internal static class ProblemLists
         List(h, "Hard rules broken (the plan cannot be driven as it is)", "bad", hard.Select(v => v.Message));
         List(h, "Soft rules broken (allowed, at their price)", "warn", soft.Select(v => v.Message));
 
-        var unserved = input.Plan.Violations.Where(v => v.Rule == "unserved").Select(v => v.Message).ToList();
+        var unserved = input.Plan.Violations.Where(v => v.Rule == RuleKind.Unserved).Select(v => v.Message).ToList();
         h.Append("<h3>Unserved stops</h3>");
         if (unserved.Count == 0)
         {

@@ -24,7 +24,4 @@ public sealed record ReportInput(Instance Instance, PlanEvaluation Plan, RunReco
             return null;
         }
     }
-
-    /// <summary>Kilometres for CSV jobs; benchmark files have unitless distance.</summary>
-    public string DistanceUnit => Run.Format is "csv-job" or "workbook" ? " km" : string.Empty;
 }

@@ -67,7 +67,7 @@ public static class ReportPage
         h.Append("<div class=\"cards\" id=\"headline\">");
         Card(h, "objective", Money(plan.Objective), null);
         Card(h, "vehicles used", $"{plan.VehiclesUsed} of {input.Instance.Vehicles.Count}", null);
-        Card(h, "distance", Num(plan.Distance, "0.0") + E(input.DistanceUnit), null);
+        Card(h, "distance", Num(plan.Distance, "0.0") + E(input.Instance.Units.DistanceSuffix), null);
         Card(h, "stops served", $"{input.Instance.StopCount - plan.Unserved.Count} of {input.Instance.StopCount}", plan.Unserved.Count > 0 ? "warn" : null);
         Card(h, "hard rules", hard == 0 ? "all kept" : $"{hard} broken", hard == 0 ? "ok" : "bad");
         var bound = Plots.ConvergencePlot.Bound(input.Solvers);

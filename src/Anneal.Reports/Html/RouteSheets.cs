@@ -34,11 +34,11 @@ internal static class RouteSheets
     {
         var v = instance.Vehicles[route.Vehicle];
         var m = route.Metrics;
-        string unit = instance.TimeUnit == "min" ? "min" : "time units";
+        string unit = instance.Units.TimeWords;
         h.Append("<section class=\"sheet\" data-vehicle=\"").Append(E(v.Id)).Append("\"><h3>Vehicle ").Append(E(v.Id)).Append("</h3>")
             .Append("<p class=\"sum\">").Append(route.Stops.Length).Append(" stops · leaves ").Append(E(instance.Depots[v.StartDepot].Id))
-            .Append(" at ").Append(TimeText.Clock(instance, m.Departure)).Append(" · back at ").Append(E(instance.Depots[v.EndDepot].Id))
-            .Append(' ').Append(TimeText.Clock(instance, m.Return)).Append(" · ").Append(Num(m.Distance, "0.0")).Append(E(input.DistanceUnit))
+            .Append(" at ").Append(instance.Units.Format(m.Departure)).Append(" · back at ").Append(E(instance.Depots[v.EndDepot].Id))
+            .Append(' ').Append(instance.Units.Format(m.Return)).Append(" · ").Append(Num(m.Distance, "0.0")).Append(E(instance.Units.DistanceSuffix))
             .Append(" · loaded ").Append(E(Load(instance, StartLoad(instance, route))))
             .Append(" · route objective ").Append(Money(route.Objective));
         if (m.Overtime > CostModel.FeasibilityTolerance)
@@ -56,10 +56,10 @@ internal static class RouteSheets
             h.Append(late ? "<tr class=\"late\">" : "<tr>")
                 .Append("<td class=\"n\">").Append(k + 1).Append("</td>")
                 .Append("<td>").Append(E(stop.Id)).Append("</td>")
-                .Append("<td class=\"n\">").Append(TimeText.Clock(instance, visit.Arrival)).Append("</td>")
+                .Append("<td class=\"n\">").Append(instance.Units.Format(visit.Arrival)).Append("</td>")
                 .Append("<td>").Append(E(Windows(instance, stop))).Append("</td>")
-                .Append("<td class=\"n\">").Append(TimeText.Clock(instance, visit.Start)).Append("</td>")
-                .Append("<td class=\"n\">").Append(TimeText.Clock(instance, visit.Departure)).Append("</td>")
+                .Append("<td class=\"n\">").Append(instance.Units.Format(visit.Start)).Append("</td>")
+                .Append("<td class=\"n\">").Append(instance.Units.Format(visit.Departure)).Append("</td>")
                 .Append("<td>").Append(E(Load(instance, route.LoadAfter[k]))).Append("</td>")
                 .Append("<td class=\"n\">").Append(late ? Num(visit.Late, "0.#") : string.Empty).Append("</td></tr>");
         }

@@ -44,7 +44,7 @@ internal static class SolverTable
                 .Append("<td class=\"n\">").Append(Money(s.Objective)).Append("</td>")
                 .Append(s.Feasible ? "<td class=\"ok\">yes</td>" : "<td class=\"bad\">no</td>")
                 .Append("<td class=\"n\">").Append(s.Vehicles).Append("</td>")
-                .Append("<td class=\"n\">").Append(Num(s.Distance, "0.0")).Append(E(input.DistanceUnit)).Append("</td>")
+                .Append("<td class=\"n\">").Append(Num(s.Distance, "0.0")).Append(E(input.Instance.Units.DistanceSuffix)).Append("</td>")
                 .Append("<td class=\"n\">").Append(within is { } w ? Seconds(w) : "–").Append("</td>")
                 .Append("<td class=\"n\">").Append(Seconds(s.SecondsToBest)).Append("</td>")
                 .Append("<td class=\"n\">").Append(Seconds(s.Seconds)).Append("</td>")

@@ -10,7 +10,7 @@ public static class ClockTicks
 {
     public static ITickGenerator For(Instance instance, double from, double to)
     {
-        if (instance.TimeUnit != "min" || !(to > from))
+        if (!instance.Units.Clock || !(to > from))
         {
             return new NumericAutomatic();
         }
@@ -21,7 +21,7 @@ public static class ClockTicks
         double first = Math.Ceiling(from / step) * step;
         for (double t = first; t <= to + 1e-9; t += step)
         {
-            ticks.AddMajor(t, TimeText.Clock(instance, t));
+            ticks.AddMajor(t, instance.Units.Format(t));
         }
 
         return ticks;

@@ -66,7 +66,7 @@ public static class ScheduleChart
         }
 
         plot.Axes.SetLimitsY(-row + 0.45, 0.6);
-        plot.XLabel(instance.TimeUnit == "min" ? "time of day" : "time");
+        plot.XLabel(instance.Units.Clock ? "time of day" : "time");
         Legend(plot);
         return plot;
     }

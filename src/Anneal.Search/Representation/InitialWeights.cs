@@ -56,10 +56,11 @@ public static class InitialWeights
         }
 
         double perKm = 1;
-        if (instance.Objective == Objective.Cost && instance.Vehicles.Count > 0)
+        if (instance.Vehicles.Count > 0)
         {
-            var v = instance.Vehicles[0];
-            perKm = Math.Max(v.CostPerDistance + (v.CostPerHour / instance.TimeUnitsPerHour * instance.Travel.TimePerDistance), 1e-3);
+            // 1 under the benchmark objectives, whose rates are 1 per distance and nothing per time.
+            var rates = instance.Costs.Rates(0);
+            perKm = Math.Max(rates.PerDistance + (rates.PerTime * instance.Travel.TimePerDistance), 1e-3);
         }
 
         return Math.Max(1e-6, sum / n * perKm);

@@ -11,28 +11,7 @@ namespace Anneal.Search.Strategy;
 /// </summary>
 public static class RouteElimination
 {
-    public static bool Applies(Instance instance)
-    {
-        if (instance.Objective == Objective.VehiclesThenDistance)
-        {
-            return true;
-        }
-
-        if (instance.Objective != Objective.Cost)
-        {
-            return false;
-        }
-
-        foreach (var v in instance.Vehicles)
-        {
-            if (v.FixedCost > 0)
-            {
-                return true;
-            }
-        }
-
-        return false;
-    }
+    public static bool Applies(Instance instance) => instance.Costs.VehiclesCost;
 
     /// <summary>How many of the shortest routes an elimination attempt chooses among.</summary>
     public const int Choices = 3;

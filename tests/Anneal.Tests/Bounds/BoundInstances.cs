@@ -73,6 +73,6 @@ internal static class BoundInstances
             Unserved = rng.Next(3) == 0 ? Rule.Soft(150) : Rule.HardRule,
         };
         return new Instance("bounds" + seed, list, [new Depot { Id = "depot", X = 25, Y = 25 }], fleet, ["kg", "crates"], ["cold"], rules,
-            (Objective)rng.Next(3), TravelTable.Planar(x, y, roundToInteger: false), "min");
+            (Objective)rng.Next(3), TravelTable.Planar(x, y, roundToInteger: false), Units.Minutes);
     }
 }

@@ -81,6 +81,6 @@ internal static class RandomInstances
         var dimNames = Enumerable.Range(0, dims).Select(d => "d" + d).ToArray();
         var objective = (Objective)rng.Next(3);
         return new Instance("random", stopList, [new Depot { Id = "depot", X = 50, Y = 50 }], fleet, dimNames, ["cold"], rules, objective,
-            TravelTable.Planar(x, y, roundToInteger: rng.Next(2) == 0), "min");
+            TravelTable.Planar(x, y, roundToInteger: rng.Next(2) == 0), Units.Minutes);
     }
 }

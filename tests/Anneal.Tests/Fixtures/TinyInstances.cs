@@ -65,7 +65,7 @@ internal static class TinyInstances
             Unserved = rng.Next(3) == 0 ? Rule.Soft(200) : Rule.HardRule,
         };
         return new Instance("tiny" + seed, list, [new Depot { Id = "depot", X = 30, Y = 30 }], fleet, ["kg"], ["cold"], rules,
-            (Objective)rng.Next(3), TravelTable.Planar(x, y, roundToInteger: true), "min");
+            (Objective)rng.Next(3), TravelTable.Planar(x, y, roundToInteger: true), Units.Minutes);
     }
 
     /// <summary>A hand-made instance: stops at the given points (depot at the origin), one-dimensional demand.</summary>
@@ -74,7 +74,7 @@ internal static class TinyInstances
         var x = stops.Select(s => s.X).Append(0).ToArray();
         var y = stops.Select(s => s.Y).Append(0).ToArray();
         return new Instance("line", stops, [new Depot { Id = "depot", X = 0, Y = 0 }], vehicles, ["kg"], ["cold"], rules, objective,
-            TravelTable.Planar(x, y, roundToInteger: true), "min");
+            TravelTable.Planar(x, y, roundToInteger: true), Units.Minutes);
     }
 
     public static Stop Stop(string id, double x, double demand = 1, double open = 0, double close = 1000, bool optional = false, double penalty = double.NaN, ulong needs = 0) => new()

@@ -27,7 +27,7 @@ internal static class TinyJob
         double[] x = [3, 6, 0, 0];
         double[] y = [4, 8, 5, 0];
         var travel = TravelTable.Planar(x, y, roundToInteger: false, timePerDistance: 60.0 / 40.0);
-        return new Instance("tiny job", stops, depots, vehicles, ["kg", "crates"], [], rules ?? RuleSet.AllHard, Objective.Cost, travel, "min", 60);
+        return new Instance("tiny job", stops, depots, vehicles, ["kg", "crates"], [], rules ?? RuleSet.AllHard, Objective.Cost, travel, Units.Minutes);
     }
 
     public static LoadedInput Loaded(Instance instance) => new(instance, new JobSettings(), "csv-job", "tiny");

@@ -48,7 +48,7 @@ internal static class ReportFixtures
 
         var rules = new RuleSet { TimeWindows = Rule.Soft(1), ShiftEnd = Rule.Soft(1) };
         var travel = TravelTable.Planar(x, y, roundToInteger: false, timePerDistance: 1.5);
-        var instance = new Instance("generated 1000", stops, [new Depot { Id = "hub", X = 30, Y = 30 }], vehicles, ["kg"], [], rules, Objective.Cost, travel, "min", 60);
+        var instance = new Instance("generated 1000", stops, [new Depot { Id = "hub", X = 30, Y = 30 }], vehicles, ["kg"], [], rules, Objective.Cost, travel, Units.Minutes);
         var order = Enumerable.Range(0, n).OrderBy(i => Math.Atan2(y[i] - 30, x[i] - 30)).ToArray();
         var routes = new List<PlannedRoute>();
         for (int v = 0; v < 100; v++)

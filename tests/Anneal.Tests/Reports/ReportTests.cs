@@ -61,7 +61,7 @@ public sealed partial class ReportTests : TempFolderTest
         var (instance, _) = ReportFixtures.DemoPlan();
         var stops = instance.Stops.Select((s, i) => i == 0 ? s with { Id = stopId } : s).ToList();
         var renamed = new Instance(instance.Name + " " + stopId, stops, instance.Depots, instance.Vehicles, instance.DimensionNames, instance.EquipmentNames,
-            instance.Rules, instance.Objective, instance.Travel, instance.TimeUnit, instance.TimeUnitsPerHour);
+            instance.Rules, instance.Objective, instance.Travel, instance.Units);
         var plan = new Anneal.Core.Plans.Plan([new Anneal.Core.Plans.PlannedRoute(0, [0, 1])]);
         return (renamed, PlanEvaluator.Evaluate(renamed, plan));
     }

@@ -27,7 +27,7 @@ public class MissedWindowTests
 
         Assert.False(result.Feasible);
         var v = Assert.Single(result.Violations, x => x.Stop == "5");
-        Assert.Equal("time-window", v.Rule);
+        Assert.Equal(RuleKind.TimeWindow, v.Rule);
         Assert.True(v.Hard);
         Assert.True(v.Amount > 0);
     }

@@ -55,7 +55,7 @@ public class WindowSemanticsTests
         Assert.Equal(67, r.Objective, 9);
         Assert.True(r.Feasible);
         Assert.Equal(["a", "b"], r.Violations.Select(x => x.Stop));
-        Assert.All(r.Violations, x => Assert.Equal(("time-window", false), (x.Rule, x.Hard)));
+        Assert.All(r.Violations, x => Assert.Equal((RuleKind.TimeWindow, false), (x.Rule, x.Hard)));
     }
 
     [Fact]
@@ -78,7 +78,7 @@ public class WindowSemanticsTests
         Assert.Equal(60, r.Objective, 9);
         Assert.False(r.Feasible);
         var only = Assert.Single(r.Violations);
-        Assert.Equal(("time-window", true, "a"), (only.Rule, only.Hard, only.Stop));
+        Assert.Equal((RuleKind.TimeWindow, true, "a"), (only.Rule, only.Hard, only.Stop));
     }
 
     [Fact]

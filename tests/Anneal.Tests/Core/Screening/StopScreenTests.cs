@@ -7,7 +7,7 @@ namespace Anneal.Tests.Core.Screening;
 public class StopScreenTests
 {
     // Depot at the origin; stop i at (10 * (i + 1), 0); one time unit per km, so travel time = distance.
-    private static Instance Build(Stop[] stops, Vehicle[] vehicles, RuleSet? rules = null, string unit = "min")
+    private static Instance Build(Stop[] stops, Vehicle[] vehicles, RuleSet? rules = null, Units? units = null)
     {
         int n = stops.Length + 1;
         var x = new double[n];
@@ -18,7 +18,7 @@ public class StopScreenTests
         }
 
         return new Instance("tiny", stops, [new Depot { Id = "hub", X = 0, Y = 0 }], vehicles, ["kg"], ["cold", "lift"],
-            rules ?? RuleSet.AllHard, Objective.Cost, TravelTable.Planar(x, y, false), unit, 60);
+            rules ?? RuleSet.AllHard, Objective.Cost, TravelTable.Planar(x, y, false), units ?? Units.Minutes);
     }
 
     private static Stop S(string id, double x, double kg = 1, ulong needs = 0, TimeWindow? window = null, double service = 0) => new()
@@ -84,10 +84,11 @@ public class StopScreenTests
     [Fact]
     public void Plain_numbers_when_the_time_unit_is_not_minutes()
     {
-        var inst = Build([S("late", 30, window: new TimeWindow(0, 20))], [V("v", 10)], unit: "");
+        var inst = Build([S("late", 30, window: new TimeWindow(0, 20))], [V("v", 10)], units: Units.Plain);
         var f = Assert.Single(StopScreen.Screen(inst));
-        Assert.Contains("is 30,", f.Reason);
-        Assert.Contains("at 20", f.Reason);
+        // The one reading of times (Units.Format): two decimals, as in routes.csv of a benchmark file.
+        Assert.Contains("is 30.00,", f.Reason);
+        Assert.Contains("at 20.00", f.Reason);
     }
 
     [Fact]

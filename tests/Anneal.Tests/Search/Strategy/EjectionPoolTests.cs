@@ -36,7 +36,7 @@ public class EjectionPoolTests
             Assert.Equal(0, state.InfeasibleRoutes);
             Assert.Equal(pool.Waiting, state.UnservedCount);
             var truth = PlanEvaluator.Evaluate(instance, state.ToPlan());
-            var broken = truth.Violations.Where(v => v.Hard && v.Rule != "unserved").Select(v => v.Message).ToList();
+            var broken = truth.Violations.Where(v => v.Hard && v.Rule != RuleKind.Unserved).Select(v => v.Message).ToList();
             Assert.True(broken.Count == 0, string.Join("; ", broken));
             Assert.Equal(instance.StopCount, CountServed(state.ToPlan()) + state.UnservedCount);
         }

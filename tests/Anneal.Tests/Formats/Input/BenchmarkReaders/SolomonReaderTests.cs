@@ -23,7 +23,7 @@ public class SolomonReaderTests
         Assert.Equal("0", Assert.Single(inst.Depots).Id);
         Assert.Equal(Objective.Distance, inst.Objective);
         Assert.Equal(RuleSet.AllHard, inst.Rules);
-        Assert.Equal(string.Empty, inst.TimeUnit);
+        Assert.Equal(Units.Plain, inst.Units);
         Assert.Equal(DistanceRule.Euclidean, inst.Travel.Rule);
 
         // Stop 4 at (5,5) from the depot at (0,0): sqrt(50), unrounded (Solomon convention: double precision).

@@ -15,8 +15,7 @@ public class CsvJobReaderTests
 
         Assert.Equal("csv-job", loaded.Format);
         Assert.Equal("small-job", inst.Name);
-        Assert.Equal("min", inst.TimeUnit);
-        Assert.Equal(60, inst.TimeUnitsPerHour);
+        Assert.Equal(Units.Minutes, inst.Units);
         Assert.Equal(["kg", "m3"], inst.DimensionNames);
         Assert.Equal(["cold", "lift"], inst.EquipmentNames); // vehicles' spelling and order; the stop's "Cold" matches case-insensitively
         Assert.Equal(["van-1", "van-2", "fridge"], inst.Vehicles.Select(v => v.Id));
