@@ -20,6 +20,7 @@ public static class AnnealServices
         services.AddSolver("insertion", () => new InsertionSolver(), byDefault: false);
         services.AddSolver("sa", () => new SimulatedAnnealing());
         services.AddSolver("tabu", () => new TabuSearch());
+        services.TryAddSingleton<IStartPlan, InsertionStart>();
         services.TryAddSingleton(sp => new SolverCatalog(sp.GetServices<SolverRegistration>()));
         services.TryAddSingleton<JobRunner>();
         services.TryAddSingleton<RunWriter>();

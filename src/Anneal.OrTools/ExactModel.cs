@@ -19,6 +19,8 @@ public sealed class ExactModel
     private readonly Instance _instance;
     private readonly IReadOnlyList<VehicleClass> _classes;
     private readonly ILiteral?[][,] _arc;
+    private readonly ILiteral[] _noRoute;
+    private readonly ILiteral?[] _dropped;
     private readonly LinearExprBuilder _objective = LinearExpr.NewBuilder();
     private readonly List<ILiteral> _starts = [];
     private readonly bool _scheduleExact;
@@ -44,6 +46,8 @@ public sealed class ExactModel
         _classes = VehicleClass.Group(instance);
         int n = instance.StopCount;
         _arc = new ILiteral?[_classes.Count][,];
+        _noRoute = new ILiteral[_classes.Count];
+        _dropped = new ILiteral?[n];
         var notes = new List<string>(ScheduleApproximations.For(instance));
         _scheduleExact = notes.Count == 0;
         SamePlans &= _scheduleExact;
@@ -85,6 +89,7 @@ public sealed class ExactModel
             if (instance.MayDrop(i) || servedBy[i].Count == 0)
             {
                 var dropped = Model.NewBoolVar("dropped" + i);
+                _dropped[i] = dropped;
                 Model.Add(sum + dropped == 1);
                 _objective.AddTerm(dropped, Scale.Cost(instance.UnservedPrice(i)));
                 if (servedBy[i].Count == 0)
@@ -186,6 +191,85 @@ public sealed class ExactModel
         return new Plan(routes);
     }
 
+    /// <summary>
+    /// Hints CP-SAT with a known plan (AddHint): its arcs on and every other arc off, so the search starts from a
+    /// complete solution and, when the plan is feasible for the model, returns at least that plan with a bound.
+    /// </summary>
+    public void Hint(Plan plan)
+    {
+        int n = _instance.StopCount;
+        var classOf = new int[_instance.Vehicles.Count];
+        for (int c = 0; c < _classes.Count; c++)
+        {
+            foreach (int v in _classes[c].Vehicles)
+            {
+                classOf[v] = c;
+            }
+        }
+
+        var on = new HashSet<(int Class, int From, int To)>();
+        var servedBy = new int[n];
+        Array.Fill(servedBy, -1);
+        var used = new bool[_classes.Count];
+        foreach (var route in plan.Routes)
+        {
+            if (route.Stops.Length == 0)
+            {
+                continue;
+            }
+
+            int c = classOf[route.Vehicle];
+            used[c] = true;
+            int previous = 0;
+            foreach (int s in route.Stops)
+            {
+                on.Add((c, previous, s + 1));
+                servedBy[s] = c;
+                previous = s + 1;
+            }
+
+            on.Add((c, previous, 0));
+        }
+
+        for (int c = 0; c < _classes.Count; c++)
+        {
+            var arcs = _arc[c];
+            for (int a = 0; a <= n; a++)
+            {
+                for (int b = 0; b <= n; b++)
+                {
+                    if (arcs[a, b] is { } literal)
+                    {
+                        Model.AddHint(literal, a == b ? servedBy[a - 1] != c : on.Contains((c, a, b)));
+                    }
+                }
+            }
+
+            Model.AddHint(_noRoute[c], !used[c]);
+        }
+
+        for (int i = 0; i < n; i++)
+        {
+            if (_dropped[i] is { } dropped)
+            {
+                Model.AddHint(dropped, servedBy[i] < 0);
+            }
+        }
+    }
+
+    /// <summary>Replaces the hint by a value for every variable (a solution of this model).</summary>
+    public void HintAll(IReadOnlyList<long> values)
+    {
+        var hint = new PartialVariableAssignment();
+        for (int i = 0; i < values.Count; i++)
+        {
+            hint.Vars.Add(i);
+            hint.Values.Add(values[i]);
+        }
+
+        Model.Model.SolutionHint = hint;
+    }
+
     private void BuildClass(int c, IntVar[] time, IntVar[] departure, IntVar[,] load, List<ILiteral>[] servedBy)
     {
         var inst = _instance;
@@ -201,6 +285,7 @@ public sealed class ExactModel
         var circuit = Model.AddMultipleCircuit();
 
         var noRoute = Model.NewBoolVar($"c{c}.none");
+        _noRoute[c] = noRoute;
         circuit.AddArc(0, n + 1, noRoute).AddArc(n + 1, 0, noRoute).AddArc(n + 1, n + 1, noRoute.Not());
 
         var allowed = new bool[n];

@@ -15,10 +15,13 @@ namespace Anneal.OrTools;
 public sealed class ExactSolver : ISolver
 {
     private readonly ExactSettings _settings;
+    private readonly IStartPlan? _start;
 
-    public ExactSolver(ExactSettings? settings = null)
+    /// <param name="start">The best known plan's source (the host's construction), given to CP-SAT as a hint.</param>
+    public ExactSolver(ExactSettings? settings = null, IStartPlan? start = null)
     {
         _settings = settings ?? new ExactSettings();
+        _start = start;
     }
 
     public string Name => "exact";
@@ -47,6 +50,15 @@ public sealed class ExactSolver : ISolver
         }
         var trace = new TraceRecorder(progress, options.TimeLimit.TotalSeconds);
         var keeper = new Keeper(instance, exact, trace, clock);
+
+        // The best known plan, Anneal's construction, as a hint: CP-SAT starts from it, and it is the answer
+        // should CP-SAT find nothing better in time.
+        if (_start?.Build(instance, cancel) is { } plan && keeper.Offer(plan, "construction (hint)") is { Feasible: true })
+        {
+            exact.Hint(plan);
+            CompleteHint(exact, options.TimeLimit - clock.Elapsed, cancel);
+        }
+
         var solver = new CpSolver();
         double seconds = Math.Max(0.01, (options.TimeLimit - clock.Elapsed).TotalSeconds);
         int workers = Math.Max(1, _settings.Workers ?? options.Threads);
@@ -116,6 +128,28 @@ public sealed class ExactSolver : ISolver
         return own is { } a && hinted is { } b ? Math.Max(a, b) : own ?? hinted;
     }
 
+    /// <summary>
+    /// CP-SAT does not reliably complete a hint that gives only the arcs (it left the tight test job without a
+    /// solution for seconds): solving once with the hinted arcs fixed yields every variable's value, and that full
+    /// solution becomes the hint.
+    /// </summary>
+    private static void CompleteHint(ExactModel exact, TimeSpan left, CancellationToken cancel)
+    {
+        var fix = new CpSolver();
+        double seconds = Math.Clamp(left.TotalSeconds / 10, 0.01, 2);
+        fix.StringParameters = string.Create(CultureInfo.InvariantCulture, $"max_time_in_seconds:{seconds} num_workers:1 fix_variables_to_their_hinted_value:true");
+        CpSolverStatus status;
+        using (cancel.Register(fix.StopSearch))
+        {
+            status = fix.Solve(exact.Model);
+        }
+
+        if (status is CpSolverStatus.Optimal or CpSolverStatus.Feasible)
+        {
+            exact.HintAll(fix.Response!.Solution);
+        }
+    }
+
     /// <summary>Judges every CP-SAT solution with Anneal's evaluator and traces the improvements.</summary>
     private sealed class Keeper(Instance instance, ExactModel exact, TraceRecorder trace, Stopwatch clock) : CpSolverSolutionCallback
     {
@@ -129,7 +163,8 @@ public sealed class ExactSolver : ISolver
             Offer(exact.Decode(BooleanValue), "CP-SAT");
         }
 
-        public void Offer(Plan plan, string state)
+        /// <summary>Keeps the plan when it beats the best; returns the evaluator's verdict on it.</summary>
+        public PlanEvaluation Offer(Plan plan, string state)
         {
             var judged = PlanEvaluator.Evaluate(instance, plan);
             if (Best is null || judged.IsBetterThan(Best))
@@ -138,6 +173,8 @@ public sealed class ExactSolver : ISolver
                 BestPlan = plan;
                 trace.Improved(new TracePoint(clock.Elapsed.TotalSeconds, Solutions, judged.Objective, judged.Objective, judged.Feasible, state));
             }
+
+            return judged;
         }
     }
 }

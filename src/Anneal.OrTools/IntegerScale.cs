@@ -62,9 +62,10 @@ public sealed class IntegerScale
         TimeScale = timeScale;
         LoadScale = loadScale;
         Origin = EarliestTime(instance);
-        HorizonSteps = Math.Ceiling((LatestTime(instance) - Origin) * TimeScale) + 1;
+        double latest = LatestTime(instance);
+        HorizonSteps = Math.Ceiling((latest - Origin) * TimeScale) + 1;
         Horizon = HorizonSteps < long.MaxValue / 2 ? (long)HorizonSteps : long.MaxValue / 2;
-        double bound = Bound(instance);
+        double bound = Bound(instance, latest - Origin);
         ObjectiveBound = bound;
         double scale = maxCostScale;
         while (scale > 1 && bound * scale > MaxTotal)
@@ -215,7 +216,8 @@ public sealed class IntegerScale
     }
 
     /// <summary>A generous objective: every vehicle's fixed cost, every stop on its own return trip at the dearest rates, every penalty.</summary>
-    private static double Bound(Instance inst)
+    /// <param name="span">Latest time less earliest time.</param>
+    private static double Bound(Instance inst, double span)
     {
         double rate = 1, hourly = 0, fixedCost = 0;
         for (int k = 0; k < inst.Vehicles.Count; k++)
@@ -245,7 +247,6 @@ public sealed class IntegerScale
             }
         }
 
-        double span = LatestTime(inst) - EarliestTime(inst);
         bound += span * (hourly + softTime) * Math.Max(1, inst.StopCount);
         return double.IsNaN(bound) ? double.PositiveInfinity : bound;
     }

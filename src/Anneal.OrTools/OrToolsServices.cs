@@ -8,8 +8,9 @@ public static class OrToolsServices
 {
     public static IServiceCollection AddOrTools(this IServiceCollection services)
     {
-        services.AddSingleton(new SolverRegistration("ortools", () => new OrToolsSolver()));
-        services.AddSingleton(new SolverRegistration("exact", () => new ExactSolver()));
+        // Both start from the host's first plan (Anneal's construction) when it offers one.
+        services.AddSingleton(sp => new SolverRegistration("ortools", () => new OrToolsSolver(start: sp.GetService<IStartPlan>())));
+        services.AddSingleton(sp => new SolverRegistration("exact", () => new ExactSolver(start: sp.GetService<IStartPlan>())));
         services.AddSingleton(new SolverRegistration("bound", () => new Bounds.BoundSolver()));
         return services;
     }

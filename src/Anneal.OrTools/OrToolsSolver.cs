@@ -1,24 +1,26 @@
 using System.Diagnostics;
 using Anneal.Core.Evaluation;
 using Anneal.Core.Model;
-using Anneal.Core.Plans;
 using Anneal.Core.Solving;
-using Google.OrTools.ConstraintSolver;
-using Google.Protobuf.WellKnownTypes;
 
 namespace Anneal.OrTools;
 
 /// <summary>
-/// OR-Tools' routing search on the mapped model. Every solution it accepts is judged by Anneal's evaluator; the
-/// best by that judgement is kept and traced, so its plan and trace compare directly with SA's and tabu's.
+/// OR-Tools' routing search on the mapped model, started from Anneal's own construction plan. Every solution it
+/// accepts is judged by Anneal's evaluator; the best by that judgement is kept and traced, so its plan and trace
+/// compare directly with SA's and tabu's. Construction and model building count against the budget, and a native
+/// search that does not stop by its deadline is left behind with its best plan so far returned.
 /// </summary>
 public sealed class OrToolsSolver : ISolver
 {
     private readonly OrToolsSettings _settings;
+    private readonly IStartPlan? _start;
 
-    public OrToolsSolver(OrToolsSettings? settings = null)
+    /// <param name="start">The warm start (the host's construction); without one OR-Tools finds its own first solution.</param>
+    public OrToolsSolver(OrToolsSettings? settings = null, IStartPlan? start = null)
     {
         _settings = settings ?? new OrToolsSettings();
+        _start = start;
     }
 
     public string Name => "ortools";
@@ -42,70 +44,62 @@ public sealed class OrToolsSolver : ISolver
     public OrToolsRun Run(Instance instance, SolveOptions options, IProgress<TracePoint>? progress, CancellationToken cancel)
     {
         var clock = Stopwatch.StartNew();
-        using var mapping = RoutingModelBuilder.Build(instance);
-        var model = mapping.Model;
-        var trace = new TraceRecorder(progress, options.TimeLimit.TotalSeconds);
-        PlanEvaluation? best = null;
-        Plan bestPlan = Plan.Empty;
-        double? engineObjective = null;
-        long solutions = 0;
-        bool targetReached = false;
-        string phase = "first solution";
+        var limit = options.TimeLimit;
+        var keeper = new RoutingKeeper(instance, new TraceRecorder(progress, limit.TotalSeconds), clock);
+        using var budget = CancellationTokenSource.CreateLinkedTokenSource(cancel);
+        budget.CancelAfter(limit);
 
-        void Offer(Plan plan, long engineCost)
-        {
-            var judged = PlanEvaluator.Evaluate(instance, plan);
-            if (best is null || judged.IsBetterThan(best))
-            {
-                best = judged;
-                bestPlan = plan;
-                engineObjective = mapping.Scale.ToObjective(engineCost);
-                trace.Improved(new TracePoint(clock.Elapsed.TotalSeconds, solutions, judged.Objective, judged.Objective, judged.Feasible, phase));
-            }
-        }
+        // Anneal's construction: the warm start, and the plan returned should OR-Tools never improve on it.
+        var warm = _start?.Build(instance, budget.Token);
+        bool warmFeasible = warm is not null && keeper.Offer(warm, "construction", countsAsSolution: false) && keeper.Best!.Feasible;
+        double constructionSeconds = clock.Elapsed.TotalSeconds;
 
-        // OR-Tools calls back on every accepted solution, improving or not; Offer keeps only improvements.
-        VoidToVoid atSolution = () =>
+        var search = new RoutingSearch(instance, options, _settings, keeper, clock);
+        Exception? failure = null;
+        var native = new Thread(() =>
         {
-            solutions++;
-            Offer(mapping.CurrentPlan(), model.CostVar().Value());
-            phase = _settings.Metaheuristic.ToString();
-            if (options.TargetObjective is double target && best is { Feasible: true } && best.Objective <= target)
+            try
             {
-                targetReached = true;
-                model.solver().FinishCurrentSearch();
+                search.Run(warmFeasible && !budget.IsCancellationRequested ? warm : null, limit);
             }
+            catch (Exception e)
+            {
+                failure = e;
+            }
+        })
+        {
+            IsBackground = true,
+            Name = "ortools search",
         };
-        VoidToBoolean cancelled = () => cancel.IsCancellationRequested;
-        model.AddAtSolutionCallback(atSolution);
-        model.AddSearchMonitor(model.solver().MakeCustomLimit(cancelled));
-
-        var parameters = operations_research_constraint_solver.DefaultRoutingSearchParameters();
-        parameters.FirstSolutionStrategy = _settings.FirstSolution;
-        parameters.LocalSearchMetaheuristic = _settings.Metaheuristic;
-        var left = options.TimeLimit - clock.Elapsed;
-        parameters.TimeLimit = Duration.FromTimeSpan(left > TimeSpan.FromMilliseconds(10) ? left : TimeSpan.FromMilliseconds(10));
-        if (options.IterationLimit is long iterations)
+        native.Start();
+        bool leftBehind = !Await(native, search, limit, clock, cancel);
+        keeper.Close();
+        if (failure is not null)
         {
-            // Solutions accepted, OR-Tools' nearest notion of an iteration; bounds the run without the clock.
-            parameters.SolutionLimit = Math.Max(1, iterations);
+            throw new InvalidOperationException("OR-Tools failed: " + failure.Message, failure);
         }
-
-        var solution = model.SolveWithParameters(parameters);
-        if (solution is not null)
-        {
-            Offer(mapping.ToPlan(solution), solution.ObjectiveValue());
-        }
-
-        string routingStatus = model.GetStatus().ToString();
-        GC.KeepAlive(atSolution);
-        GC.KeepAlive(cancelled);
 
         // What the mapping approximates only matters for a plan; without one, say only how the search went.
-        var notes = new List<string>(best is null ? [] : mapping.Notes)
+        var best = keeper.Best;
+        var notes = new List<string>(best is null ? [] : search.MappingNotes)
         {
-            $"first solution {_settings.FirstSolution}, metaheuristic {_settings.Metaheuristic}; {solutions} solutions accepted",
+            FormattableString.Invariant($"{(search.Start.Length > 0 ? search.Start : "no search")}, metaheuristic {_settings.Metaheuristic}; construction {constructionSeconds:0.0} s, model {search.BuildSeconds:0.0} s; {keeper.Solutions} solutions accepted"),
         };
+        if (keeper.BestSource == "construction")
+        {
+            notes.Add("OR-Tools did not improve on Anneal's construction, which is returned");
+        }
+
+        if (leftBehind)
+        {
+            notes.Add(FormattableString.Invariant($"OR-Tools did not stop within {_settings.GraceSeconds:0.#} s of its deadline; its search was left behind and its best plan so far is returned"));
+        }
+
+        if (search.Engine is { } engine)
+        {
+            notes.Add(engine.Cost.Compare(PlanEvaluator.Evaluate(instance, engine.Plan).Breakdown));
+        }
+
         if (options.Threads > 1)
         {
             notes.Add("OR-Tools routing search runs on one thread");
@@ -114,20 +108,60 @@ public sealed class OrToolsSolver : ISolver
         double seconds = clock.Elapsed.TotalSeconds;
         var status = best is null ? SolverStatus.NoSolution
             : cancel.IsCancellationRequested ? SolverStatus.Interrupted
-            : targetReached ? SolverStatus.TargetReached
-            : options.IterationLimit is long limit && solutions >= limit ? SolverStatus.IterationLimit
-            : seconds >= options.TimeLimit.TotalSeconds * 0.99 ? SolverStatus.TimeLimit
+            : search.TargetReached ? SolverStatus.TargetReached
+            : options.IterationLimit is long iterations && keeper.Solutions >= iterations ? SolverStatus.IterationLimit
+            : leftBehind || seconds >= limit.TotalSeconds * 0.99 ? SolverStatus.TimeLimit
             : SolverStatus.Completed;
         if (best is null)
         {
-            notes.Add($"routing status: {routingStatus}");
-        }
-        if (best is not null)
-        {
-            trace.Finish(new TracePoint(seconds, solutions, best.Objective, best.Objective, best.Feasible, "end"));
+            notes.Add($"routing status: {search.RoutingStatus}");
         }
 
-        var result = new SolverResult(Name, bestPlan, seconds, trace.SecondsToBest, trace.Points, status, null, notes) { HasPlan = best is not null };
-        return new OrToolsRun(result, engineObjective, routingStatus);
+        var trace = keeper.Trace;
+        if (best is not null)
+        {
+            trace.Finish(new TracePoint(seconds, keeper.Solutions, best.Objective, best.Objective, best.Feasible, "end"));
+        }
+
+        var result = new SolverResult(Name, keeper.BestPlan, seconds, trace.SecondsToBest, trace.Points, status, null, notes) { HasPlan = best is not null };
+        return new OrToolsRun(result, search.Engine?.Cost.Reported, search.RoutingStatus, search.Engine?.Cost, search.Engine?.Plan);
+    }
+
+    /// <summary>
+    /// Waits for the native search. At the deadline or on cancellation asks it to stop, a little later interrupts
+    /// it, and after the grace period stops waiting. False when the search was left behind.
+    /// </summary>
+    private bool Await(Thread native, RoutingSearch search, TimeSpan limit, Stopwatch clock, CancellationToken cancel)
+    {
+        var grace = TimeSpan.FromSeconds(_settings.GraceSeconds);
+        var interruptAfter = grace * 2 / 3;
+        TimeSpan? stopAt = null;
+        bool interrupted = false;
+        while (!native.Join(TimeSpan.FromMilliseconds(20)))
+        {
+            if (stopAt is null && (cancel.IsCancellationRequested || clock.Elapsed >= limit))
+            {
+                search.Stop();
+                stopAt = clock.Elapsed;
+            }
+
+            if (stopAt is not { } at)
+            {
+                continue;
+            }
+
+            if (!interrupted && clock.Elapsed - at > interruptAfter)
+            {
+                search.Interrupt();
+                interrupted = true;
+            }
+
+            if (clock.Elapsed - at > grace)
+            {
+                return false;
+            }
+        }
+
+        return true;
     }
 }

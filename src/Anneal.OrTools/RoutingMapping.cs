@@ -10,8 +10,13 @@ namespace Anneal.OrTools;
 /// </summary>
 public sealed class RoutingMapping : IDisposable
 {
-    internal RoutingMapping(Instance instance, IntegerScale scale, RoutingIndexManager manager, RoutingModel model, IReadOnlyList<string> notes)
+    private readonly TravelCallbacks _travel;
+    private readonly Func<int, int, long>[] _arcCost;
+
+    internal RoutingMapping(Instance instance, IntegerScale scale, RoutingIndexManager manager, RoutingModel model, TravelCallbacks travel, Func<int, int, long>[] arcCost, IReadOnlyList<string> notes)
     {
+        _travel = travel;
+        _arcCost = arcCost;
         Instance = instance;
         Scale = scale;
         Manager = manager;
@@ -26,6 +31,13 @@ public sealed class RoutingMapping : IDisposable
 
     /// <summary>Rules expressed only approximately ("approximated: ...") and other facts a user should know.</summary>
     public IReadOnlyList<string> Notes { get; }
+
+    /// <summary>True when travel went to OR-Tools as dense matrices, false for callbacks over the travel table.</summary>
+    public bool DenseTravel => _travel.Dense;
+
+    /// <summary>The scaled arc cost vehicle <paramref name="vehicle"/> pays between two routing indices, as given to OR-Tools.</summary>
+    public long ArcCost(int vehicle, long from, long to) =>
+        _arcCost[vehicle](_travel.LocationOf(from), _travel.LocationOf(to));
 
     /// <summary>The plan in the model's current solution (inside an at-solution callback).</summary>
     public Plan CurrentPlan() => ReadPlan(index => Model.NextVar(index).Value());
@@ -58,6 +70,7 @@ public sealed class RoutingMapping : IDisposable
     /// <summary>Frees the native model (the model before the manager it refers to).</summary>
     public void Dispose()
     {
+        _travel.KeepAlive();
         Model.Dispose();
         Manager.Dispose();
     }

@@ -11,7 +11,14 @@ public static class RoutingModelBuilder
 {
     public const string TimeDimension = "time";
 
-    public static RoutingMapping Build(Instance instance)
+    /// <summary>
+    /// Up to this many nodes travel goes to OR-Tools as matrices (fastest to search); above it as callbacks over
+    /// Anneal's travel table, since each matrix costs 8 bytes per arc twice over (managed and native): 1.6 GB per
+    /// matrix at 10,000 stops. Measured in the notes of issue 18.
+    /// </summary>
+    public const int MatrixLimit = 2000;
+
+    public static RoutingMapping Build(Instance instance, int matrixLimit = MatrixLimit)
     {
         var scale = new IntegerScale(instance);
         ScalingGuard.Ensure(instance, scale);
@@ -29,8 +36,9 @@ public static class RoutingModelBuilder
 
         var manager = new RoutingIndexManager(nodeLocation.Length, vehicles, starts, ends);
         var model = new RoutingModel(manager);
-        ArcCosts(instance, scale, model, nodeLocation);
-        Time(instance, scale, model, manager, nodeLocation);
+        var travel = new TravelCallbacks(model, manager, nodeLocation, nodeLocation.Length <= matrixLimit);
+        var arcCost = ArcCosts(instance, scale, model, travel);
+        Time(instance, scale, model, manager, travel);
         Loads(instance, scale, model, nodeLocation);
         for (int v = 0; v < vehicles; v++)
         {
@@ -39,7 +47,7 @@ public static class RoutingModelBuilder
 
         Visits(instance, scale, model, manager, notes);
         notes.AddRange(scale.Notes);
-        return new RoutingMapping(instance, scale, manager, model, notes);
+        return new RoutingMapping(instance, scale, manager, model, travel, arcCost, notes);
     }
 
     /// <summary>Stops, then each depot some vehicle starts or ends at.</summary>
@@ -68,29 +76,36 @@ public static class RoutingModelBuilder
         return nodes.ToArray();
     }
 
-    /// <summary>Arc cost = distance × the vehicle's price per distance (1 outside the cost objective); one matrix per distinct price.</summary>
-    private static void ArcCosts(Instance instance, IntegerScale scale, RoutingModel model, int[] nodeLocation)
+    /// <summary>
+    /// Arc cost = distance × the vehicle's price per distance (1 outside the cost objective); one matrix or callback
+    /// per distinct price. Returns each vehicle's arc cost of locations, as registered.
+    /// </summary>
+    private static Func<int, int, long>[] ArcCosts(Instance instance, IntegerScale scale, RoutingModel model, TravelCallbacks travel)
     {
-        var byRate = new Dictionary<double, int>();
+        var byRate = new Dictionary<double, (int Callback, Func<int, int, long> Cost)>();
+        var costs = new Func<int, int, long>[instance.Vehicles.Count];
         for (int v = 0; v < instance.Vehicles.Count; v++)
         {
             double rate = instance.Objective == Objective.Cost ? instance.Vehicles[v].CostPerDistance : 1;
-            if (!byRate.TryGetValue(rate, out int callback))
+            if (!byRate.TryGetValue(rate, out var registered))
             {
-                var m = Matrix(nodeLocation, (a, b) =>
-                    a >= instance.StopCount && b >= instance.StopCount ? 0 : scale.Cost(instance.Travel.Distance(a, b) * rate));
-                callback = model.RegisterTransitMatrix(m);
-                byRate[rate] = callback;
+                Func<int, int, long> cost = (a, b) =>
+                    a == b || (a >= instance.StopCount && b >= instance.StopCount) ? 0 : scale.Cost(instance.Travel.Distance(a, b) * rate);
+                registered = (travel.Register(cost), cost);
+                byRate[rate] = registered;
             }
 
-            model.SetArcCostEvaluatorOfVehicle(callback, v);
+            model.SetArcCostEvaluatorOfVehicle(registered.Callback, v);
+            costs[v] = registered.Cost;
         }
+
+        return costs;
     }
 
     /// <summary>Service start times: shifts, windows (hard ranges or soft upper bounds), per-hour cost, maximum duration.</summary>
-    private static void Time(Instance instance, IntegerScale scale, RoutingModel model, RoutingIndexManager manager, int[] nodeLocation)
+    private static void Time(Instance instance, IntegerScale scale, RoutingModel model, RoutingIndexManager manager, TravelCallbacks travel)
     {
-        int callback = model.RegisterTransitMatrix(Matrix(nodeLocation, scale.Transit));
+        int callback = travel.Register(scale.Transit);
         model.AddDimension(callback, scale.Horizon, scale.Horizon, false, TimeDimension);
         var time = model.GetMutableDimension(TimeDimension);
         var rules = instance.Rules;
@@ -236,21 +251,5 @@ public static class RoutingModelBuilder
                 model.VehicleVar(index).SetValues(allowed.ToArray());
             }
         }
-    }
-
-    private static long[][] Matrix(int[] nodeLocation, Func<int, int, long> value)
-    {
-        int count = nodeLocation.Length;
-        var m = new long[count][];
-        for (int a = 0; a < count; a++)
-        {
-            m[a] = new long[count];
-            for (int b = 0; b < count; b++)
-            {
-                m[a][b] = a == b ? 0 : value(nodeLocation[a], nodeLocation[b]);
-            }
-        }
-
-        return m;
     }
 }

@@ -68,6 +68,92 @@ internal static class TinyInstances
             (Objective)rng.Next(3), TravelTable.Planar(x, y, roundToInteger: true), Units.Minutes);
     }
 
+    /// <summary>
+    /// <see cref="Random"/> with two windows on most stops (a gap between them) and soft windows and shift ends,
+    /// so plans are late and served in second windows. No per-hour cost: with several windows OR-Tools may leave
+    /// later than Anneal's schedule, which changes only the route duration (see ScheduleApproximations).
+    /// </summary>
+    public static Instance SeveralWindows(int seed, int stops, int vehicles)
+    {
+        var rng = new Random(seed);
+        var basis = Random(seed, stops, vehicles);
+        var list = new List<Stop>();
+        foreach (var s in basis.Stops)
+        {
+            double open = rng.Next(0, 150);
+            double first = open + rng.Next(15, 40);
+            double second = first + rng.Next(20, 90);
+            var windows = rng.Next(4) == 0
+                ? new[] { new TimeWindow(open, first) }
+                : new[] { new TimeWindow(open, first), new TimeWindow(second, second + rng.Next(15, 40)) };
+            list.Add(s with { Windows = windows });
+        }
+
+        var fleet = basis.Vehicles.Select(v => v with { CostPerHour = 0, ShiftEnd = 260, MaxDuration = double.PositiveInfinity }).ToList();
+        var rules = new RuleSet
+        {
+            TimeWindows = Rule.Soft(1),
+            Capacity = Rule.HardRule,
+            ShiftEnd = Rule.Soft(2),
+            MaxDuration = Rule.HardRule,
+            Unserved = Rule.Soft(200),
+        };
+        var x = basis.Stops.Select(s => s.X).Append(30).ToArray();
+        var y = basis.Stops.Select(s => s.Y).Append(30).ToArray();
+        return new Instance("windows" + seed, list, basis.Depots, fleet, ["kg"], ["cold"], rules, Objective.Cost,
+            TravelTable.Planar(x, y, roundToInteger: true), "min");
+    }
+
+    /// <summary>
+    /// A tightly packed job, every rule hard: 25 stops whose demands fill three vans to 243 of their 255 trays
+    /// (a bin-packing start that OR-Tools' savings heuristic fails on), half of them with 90-minute windows.
+    /// </summary>
+    public static Instance Tight(int seed)
+    {
+        var rng = new Random(seed);
+        int[] sizes = [5, 6, 7, 9, 11, 13, 14, 17];
+        int[] demand;
+        do
+        {
+            demand = Enumerable.Range(0, 25).Select(_ => sizes[rng.Next(sizes.Length)]).ToArray();
+        }
+        while (demand.Sum() != 243);
+
+        var x = new double[26];
+        var y = new double[26];
+        var list = new List<Stop>();
+        for (int i = 0; i < 25; i++)
+        {
+            x[i] = rng.Next(0, 21);
+            y[i] = rng.Next(0, 16);
+            int open = 60 * rng.Next(7, 14);
+            list.Add(new Stop
+            {
+                Id = "t" + (i + 1),
+                X = x[i],
+                Y = y[i],
+                Demand = [demand[i]],
+                ServiceTime = 15,
+                Windows = rng.Next(2) == 0 ? [TimeWindow.Always] : [new TimeWindow(open, open + 90)],
+            });
+        }
+
+        x[25] = 10;
+        y[25] = 7;
+        var fleet = Enumerable.Range(1, 3).Select(v => new Vehicle
+        {
+            Id = "van-" + v,
+            Capacity = [85],
+            ShiftStart = 360,
+            ShiftEnd = 960,
+            FixedCost = 50,
+            CostPerDistance = 0.4,
+            CostPerHour = 20,
+        }).ToList();
+        return new Instance("tight" + seed, list, [new Depot { Id = "hub", X = 10, Y = 7 }], fleet, ["trays"], [], RuleSet.AllHard, Objective.Cost,
+            TravelTable.Planar(x, y, roundToInteger: true), "min");
+    }
+
     /// <summary>A hand-made instance: stops at the given points (depot at the origin), one-dimensional demand.</summary>
     public static Instance Line(Stop[] stops, Vehicle[] vehicles, RuleSet rules, Objective objective = Objective.Distance)
     {
