@@ -98,7 +98,13 @@ public sealed class ExactSolver : ISolver
                 notes = ["CP-SAT proved that its integer model has no plan that keeps every hard rule"];
                 break;
             default:
-                result = cancel.IsCancellationRequested ? SolverStatus.Interrupted : SolverStatus.NoSolution;
+                result = cancel.IsCancellationRequested ? SolverStatus.Interrupted : keeper.Best is null ? SolverStatus.NoSolution : SolverStatus.TimeLimit;
+                if (keeper.Best is not null)
+                {
+                    lowerBound = hints?.ObjectiveAtLeast;
+                    notes.Add("CP-SAT found no plan of its own in time; its hint, Anneal's construction, is returned");
+                }
+
                 break;
         }
 
