@@ -1,4 +1,5 @@
 using System.Diagnostics;
+using System.Runtime.ExceptionServices;
 using Anneal.Core.Evaluation;
 using Anneal.Core.Model;
 using Anneal.Core.Solving;
@@ -40,7 +41,6 @@ public sealed class OrToolsSolver : ISolver
     }
 
     /// <exception cref="ScalingDeclinedException">when the model does not fit OR-Tools' integers (see <see cref="ScalingGuard"/>).</exception>
-
     public OrToolsRun Run(Instance instance, SolveOptions options, IProgress<TracePoint>? progress, CancellationToken cancel)
     {
         var clock = Stopwatch.StartNew();
@@ -74,6 +74,11 @@ public sealed class OrToolsSolver : ISolver
         native.Start();
         bool leftBehind = !Await(native, search, limit, clock, cancel);
         keeper.Close();
+        if (failure is ScalingDeclinedException declined)
+        {
+            ExceptionDispatchInfo.Throw(declined);
+        }
+
         if (failure is not null)
         {
             throw new InvalidOperationException("OR-Tools failed: " + failure.Message, failure);
