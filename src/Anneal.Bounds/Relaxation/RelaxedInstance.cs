@@ -28,6 +28,9 @@ public sealed class RelaxedInstance
 
     public int StopCount { get; }
 
+    /// <summary>Lower bounds on travel between locations along any route; null when no hard rule depends on time.</summary>
+    public ShortestTimes? Paths { get; }
+
     /// <summary>Service starts under the windows, as the evaluator schedules them.</summary>
     public ServiceStart Starts { get; }
 
@@ -51,10 +54,11 @@ public sealed class RelaxedInstance
     /// <summary>Why no bound can be offered (null when one can).</summary>
     public string? Declined { get; }
 
-    private RelaxedInstance(Instance instance, ServiceStart starts, IReadOnlyList<RouteKind> kinds, bool[] required, double[] drop, double constant, IReadOnlyList<string> relaxed, string? declined)
+    private RelaxedInstance(Instance instance, ServiceStart starts, ShortestTimes? paths, IReadOnlyList<RouteKind> kinds, bool[] required, double[] drop, double constant, IReadOnlyList<string> relaxed, string? declined)
     {
         Instance = instance;
         Starts = starts;
+        Paths = paths;
         StopCount = instance.StopCount;
         Kinds = kinds;
         Required = required;
@@ -87,7 +91,9 @@ public sealed class RelaxedInstance
         var relaxed = new List<string>();
         string? declined = NegativePrice(instance);
         var starts = new ServiceStart(instance);
-        var kinds = GroupKinds(instance, starts);
+        bool timed = rules.TimeWindows.Hard || rules.ShiftEnd.Hard;
+        var paths = timed ? new ShortestTimes(instance) : null;
+        var kinds = GroupKinds(instance, starts, paths!);
         int n = instance.StopCount;
         var required = new bool[n];
         var drop = new double[n];
@@ -130,7 +136,7 @@ public sealed class RelaxedInstance
 
         Note(relaxed, anyDuration, rules.MaxDuration.Hard ? "maximum route duration" : "soft maximum route duration (its excess only adds its price)");
         Note(relaxed, anyHourly && instance.Objective == Objective.Cost, "driver time counted as driving and service, without waiting");
-        return new RelaxedInstance(instance, starts, kinds, required, drop, constant, relaxed, declined);
+        return new RelaxedInstance(instance, starts, paths, kinds, required, drop, constant, relaxed, declined);
     }
 
     private static void Note(List<string> list, bool when, string what)
@@ -166,7 +172,22 @@ public sealed class RelaxedInstance
         return negative ? "a price, a cost rate or a travel value is negative (or not a number); the bounds assume none is" : null;
     }
 
-    private static List<RouteKind> GroupKinds(Instance instance, ServiceStart starts)
+    /// <summary>The kind of each vehicle of the fleet.</summary>
+    public int KindOf(int vehicle)
+    {
+        string key = Key(Instance, Instance.Vehicles[vehicle]);
+        for (int k = 0; k < Kinds.Count; k++)
+        {
+            if (Key(Instance, Instance.Vehicles[Kinds[k].Representative]) == key)
+            {
+                return k;
+            }
+        }
+
+        return -1;
+    }
+
+    private static List<RouteKind> GroupKinds(Instance instance, ServiceStart starts, ShortestTimes paths)
     {
         var byKey = new Dictionary<string, int>(StringComparer.Ordinal);
         var counts = new List<int>();
@@ -189,13 +210,13 @@ public sealed class RelaxedInstance
         var kinds = new List<RouteKind>(counts.Count);
         for (int k = 0; k < counts.Count; k++)
         {
-            kinds.Add(Kind(instance, starts, first[k], counts[k]));
+            kinds.Add(Kind(instance, starts, paths, first[k], counts[k]));
         }
 
         return kinds;
     }
 
-    private static RouteKind Kind(Instance instance, ServiceStart starts, int vehicle, int count)
+    private static RouteKind Kind(Instance instance, ServiceStart starts, ShortestTimes paths, int vehicle, int count)
     {
         var v = instance.Vehicles[vehicle];
         var rules = instance.Rules;
@@ -225,14 +246,14 @@ public sealed class RelaxedInstance
         };
         for (int i = 0; i < instance.StopCount; i++)
         {
-            kind.Serves[i] = Alone(instance, starts, kind, v, i);
+            kind.Serves[i] = Alone(instance, starts, paths, kind, v, i);
         }
 
         return kind;
     }
 
     /// <summary>Can the kind serve the stop on a route of its own within the hard rules (so possibly on any route)?</summary>
-    private static bool Alone(Instance instance, ServiceStart starts, RouteKind kind, Vehicle v, int stop)
+    private static bool Alone(Instance instance, ServiceStart starts, ShortestTimes paths, RouteKind kind, Vehicle v, int stop)
     {
         if ((instance.Stops[stop].Needs & ~v.Equipment) != 0)
         {
@@ -252,8 +273,8 @@ public sealed class RelaxedInstance
             return true;
         }
 
-        double start = starts.At(stop, kind.ShiftStart + instance.Travel.Duration(kind.Start, stop));
-        return !double.IsNaN(start) && start + instance.ServiceTime(stop) + instance.Travel.Duration(stop, kind.End) <= kind.LatestReturn;
+        double start = starts.At(stop, kind.ShiftStart + paths.Between(kind.Start, stop));
+        return !double.IsNaN(start) && start + instance.ServiceTime(stop) + paths.Between(stop, kind.End) <= kind.LatestReturn;
     }
 
     private static string Key(Instance instance, Vehicle v)

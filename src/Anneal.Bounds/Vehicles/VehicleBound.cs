@@ -206,15 +206,16 @@ public static class VehicleBound
 
     private static bool InOrder(RelaxedInstance relaxed, RouteKind kind, int i, int j)
     {
-        var travel = relaxed.Instance.Travel;
+        // Other stops may lie between the two: their times are lower bounds along any path, not the direct arcs.
+        var paths = relaxed.Paths!;
         var starts = relaxed.Starts;
-        double si = starts.At(i, kind.ShiftStart + travel.Duration(kind.Start, i));
+        double si = starts.At(i, kind.ShiftStart + paths.Between(kind.Start, i));
         if (double.IsNaN(si))
         {
             return false;
         }
 
-        double sj = starts.At(j, si + relaxed.Service(i) + travel.Duration(i, j));
-        return !double.IsNaN(sj) && sj + relaxed.Service(j) + travel.Duration(j, kind.End) <= kind.LatestReturn;
+        double sj = starts.At(j, si + relaxed.Service(i) + paths.Between(i, j));
+        return !double.IsNaN(sj) && sj + relaxed.Service(j) + paths.Between(j, kind.End) <= kind.LatestReturn;
     }
 }

@@ -11,12 +11,27 @@ namespace Anneal.OrTools.Bounds;
 /// </summary>
 internal static class BoundStages
 {
+    /// <summary>Above this many stops column generation is not tried (the pricing network grows with the square).</summary>
+    public const int ColumnLimit = 1500;
+
+    /// <summary>Neighbourhood size of the ng-routes: 8 is the usual choice (Baldacci, Mingozzi &amp; Roberti 2011).</summary>
+    public const int NgSize = 8;
+
     /// <summary>Runs the stages until <paramref name="stop"/> fires; returns the vehicle count and notes for the user.</summary>
     public static VehicleCount Run(RelaxedInstance relaxed, BoundKeeper keeper, List<string> notes, CancellationToken stop)
     {
         var vehicles = VehicleBound.Compute(relaxed);
         notes.Add(string.Create(CultureInfo.InvariantCulture, $"at least {vehicles.Vehicles} vehicle(s): {vehicles.Reason}"));
         keeper.Offer(ArcShareBound.Compute(relaxed, vehicles, stop), "vehicles and cheapest arcs");
+        if (relaxed.StopCount <= ColumnLimit && !stop.IsCancellationRequested)
+        {
+            var seed = new Search.Construction.InsertionSolver().Solve(relaxed.Instance, new Search.Running.SolveOptions(), null, stop).Plan;
+            var generation = new ColumnGeneration(relaxed, vehicles.Vehicles, NgSize, seed);
+            generation.Run(keeper, stop);
+            notes.Add(string.Create(CultureInfo.InvariantCulture,
+                $"column generation: {generation.Rounds} rounds, {generation.Columns} routes, {(generation.Converged ? "converged" : "stopped before converging")}"));
+        }
+
         return vehicles;
     }
 }

@@ -1,5 +1,6 @@
 using Anneal.Core.Evaluation;
 using Anneal.Core.Plans;
+using Anneal.OrTools;
 using Anneal.OrTools.Bounds;
 using Anneal.Core.Solving;
 
@@ -21,6 +22,27 @@ public sealed class BoundSolverTests
     [Theory]
     [MemberData(nameof(Seeds))]
     public void NeverAboveTheOptimumOfTinyInstances(int seed) => AtMostOptimum(TinyInstances.Random(seed, 7, 2), seed);
+
+    [Theory]
+    [InlineData(21, 10, 3)]
+    [InlineData(22, 11, 3)]
+    [InlineData(23, 12, 3)]
+    [InlineData(24, 12, 2)]
+    public void NeverAboveWhatTheExactModelFinds(int seed, int stops, int vehicles)
+    {
+        // Any plan that keeps the hard rules costs at least the optimum; CP-SAT's plan is the optimum when proven.
+        var instance = TinyInstances.Random(seed, stops, vehicles);
+        var exact = new ExactSolver(new ExactSettings { Workers = 2 }).Solve(instance, new SolveOptions { TimeLimit = TimeSpan.FromSeconds(4) }, null, default);
+        var bound = new BoundSolver().Solve(instance, new SolveOptions { TimeLimit = TimeSpan.FromSeconds(10) }, null, default);
+        var judged = PlanEvaluator.Evaluate(instance, exact.Plan);
+        if (!exact.HasPlan || !judged.Feasible)
+        {
+            return;
+        }
+
+        Assert.NotNull(bound.LowerBound);
+        Assert.True(bound.LowerBound!.Value <= judged.Objective + 1e-9, $"seed {seed}: bound {bound.LowerBound} > plan {judged.Objective} ({exact.Status})");
+    }
 
     [Fact]
     public void OffersNoPlanAndIsNeverChosen()
