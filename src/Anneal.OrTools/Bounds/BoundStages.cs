@@ -25,11 +25,10 @@ internal static class BoundStages
         keeper.Offer(ArcShareBound.Compute(relaxed, vehicles, stop), "vehicles and cheapest arcs");
         if (relaxed.StopCount <= ColumnLimit && !stop.IsCancellationRequested)
         {
-            var seed = new Search.Construction.InsertionSolver().Solve(relaxed.Instance, new Search.Running.SolveOptions(), null, stop).Plan;
-            var generation = new ColumnGeneration(relaxed, vehicles.Vehicles, NgSize, seed);
+            var generation = new ColumnGeneration(relaxed, vehicles.Vehicles, NgSize);
             generation.Run(keeper, stop);
             notes.Add(string.Create(CultureInfo.InvariantCulture,
-                $"column generation: {generation.Rounds} rounds, {generation.Columns} routes, {(generation.Converged ? "converged" : "stopped before converging")}"));
+                $"column generation: {generation.Rounds} rounds, {generation.Columns} routes, {(generation.Converged ? "converged" : "stopped before converging")}{(generation.Failure is { } why ? ": " + why : string.Empty)}"));
         }
 
         return vehicles;

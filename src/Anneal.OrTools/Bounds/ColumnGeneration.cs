@@ -11,8 +11,7 @@ namespace Anneal.OrTools.Bounds;
 /// the ng-routes, when heuristics find nothing and every few rounds, yields the Lagrangian bound
 /// (<see cref="LagrangianBound"/>), offered each time, so stopping at any moment leaves the last proven bound.
 /// </summary>
-/// <param name="seed">Routes of a plan found quickly (any plan: columns only steer the duals), so the master starts near a good solution.</param>
-internal sealed class ColumnGeneration(RelaxedInstance relaxed, int minVehicles, int ngSize, Core.Plans.Plan? seed = null)
+internal sealed class ColumnGeneration(RelaxedInstance relaxed, int minVehicles, int ngSize)
 {
     private const int ColumnsPerKind = 150;
 
@@ -24,6 +23,9 @@ internal sealed class ColumnGeneration(RelaxedInstance relaxed, int minVehicles,
     public long Columns { get; private set; }
 
     public bool Converged { get; private set; }
+
+    /// <summary>Why the generation ended early, when it did for a reason other than time.</summary>
+    public string? Failure { get; private set; }
 
     public void Run(BoundKeeper keeper, CancellationToken stop)
     {
@@ -50,6 +52,7 @@ internal sealed class ColumnGeneration(RelaxedInstance relaxed, int minVehicles,
             var lpClock = Stopwatch.StartNew();
             if (!master.Solve(TimeSpan.FromSeconds(60)))
             {
+                Failure = "the LP solver stopped with status " + master.LastStatus.ToString().ToLowerInvariant();
                 return;
             }
 
@@ -115,12 +118,13 @@ internal sealed class ColumnGeneration(RelaxedInstance relaxed, int minVehicles,
 
     private void Seed(RestrictedMaster master, PricingNetwork[] networks)
     {
-        foreach (var route in seed?.Routes ?? [])
+        // Nearest-neighbour routes of each kind in turn, so the first duals are sensible; single-stop routes after them.
+        var covered = new bool[relaxed.StopCount];
+        for (int k = 0; k < networks.Length; k++)
         {
-            int k = relaxed.KindOf(route.Vehicle);
-            if (k >= 0 && route.Stops.Length > 0)
+            foreach (var route in GreedyRoutes.Build(networks[k], covered, relaxed.Kinds[k].Count))
             {
-                master.Add(k, route.Stops, RouteCost(networks[k], route.Stops));
+                master.Add(k, route, RouteCost(networks[k], route));
             }
         }
 

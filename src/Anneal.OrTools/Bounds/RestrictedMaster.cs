@@ -18,6 +18,7 @@ internal sealed class RestrictedMaster : IDisposable
     private readonly Constraint[] _kindRow;
     private readonly Constraint _fleetRow;
     private readonly HashSet<string> _seen = new(StringComparer.Ordinal);
+    private bool _presolve;
 
     public int Columns { get; private set; }
 
@@ -108,10 +109,22 @@ internal sealed class RestrictedMaster : IDisposable
     public bool Solve(TimeSpan limit)
     {
         _lp.SetTimeLimit((long)Math.Max(1, limit.TotalMilliseconds));
-        return _lp.Solve() == Solver.ResultStatus.OPTIMAL;
+        LastStatus = _lp.Solve();
+        if (LastStatus != Solver.ResultStatus.OPTIMAL && !_presolve)
+        {
+            // Warm starts without presolve can run into numerical trouble; from then on GLOP solves with its defaults.
+            _presolve = true;
+            _lp.SetSolverSpecificParametersAsString(string.Empty);
+            _lp.Reset();
+            LastStatus = _lp.Solve();
+        }
+
+        return LastStatus == Solver.ResultStatus.OPTIMAL;
     }
 
     public double Value => _lp.Objective().Value();
+
+    public Solver.ResultStatus LastStatus { get; private set; }
 
     /// <summary>Duals with the signs the Lagrangian bound needs: stops ≥ 0, kinds ≤ 0, fleet ≥ 0.</summary>
     public Duals Duals()

@@ -1,8 +1,9 @@
+using Anneal.Core.Evaluation;
 using Anneal.Core.Model;
+using Anneal.Core.Solving;
 using Anneal.Core.Travel;
 using Anneal.Formats.Input;
 using Anneal.OrTools.Bounds;
-using Anneal.Search.Running;
 
 namespace Anneal.Tests.Bounds;
 
@@ -31,7 +32,7 @@ public sealed class PublishedOptimaTests
         // double-precision times (bks.csv: 828.94, "feasible ... True"): a plan, so the optimum is at most its cost.
         var loaded = InputLoader.Load(BenchmarkData.File("solomon/c101.txt"));
         var plan = RouteFileReader.Read(BenchmarkData.File("solomon/c101.distance-only.sol"), loaded.Instance);
-        var judged = Core.Evaluation.PlanEvaluator.Evaluate(loaded.Instance, plan);
+        var judged = PlanEvaluator.Evaluate(loaded.Instance, plan);
         Assert.True(judged.Feasible);
         double bound = Bound(loaded.Instance, 60);
         Assert.True(bound <= judged.Objective, $"bound {bound} > {judged.Objective}, the cost of a feasible plan");
@@ -53,7 +54,7 @@ public sealed class PublishedOptimaTests
         var instance = InputLoader.Load(BenchmarkData.File("cvrp/X-n101-k25.vrp")).Instance;
         using var cancel = new CancellationTokenSource(TimeSpan.FromSeconds(2));
         var result = new BoundSolver().Solve(instance, new SolveOptions { TimeLimit = TimeSpan.FromSeconds(60) }, null, cancel.Token);
-        Assert.Equal("interrupted", result.Status);
+        Assert.Equal(SolverStatus.Interrupted, result.Status);
         Assert.NotNull(result.LowerBound);
         Assert.True(result.LowerBound!.Value <= 27591, $"bound {result.LowerBound} > 27591");
         Assert.True(result.LowerBound.Value > 0);
