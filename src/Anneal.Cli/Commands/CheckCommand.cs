@@ -34,6 +34,16 @@ public static class CheckCommand
         context.Out.WriteLine($"{path}: valid ({loaded.Format}{(loaded.ReadAs is null ? string.Empty : ", " + loaded.ReadAs)})");
         context.Out.WriteLine("  " + InstanceDescription.Size(instance));
         context.Out.WriteLine("  " + InstanceDescription.Rules(instance));
+        foreach (var line in RuleMeanings.Lines(instance))
+        {
+            context.Out.WriteLine("    " + line);
+        }
+
+        foreach (var warning in loaded.Warnings.Concat(RuleScreen.Warnings(instance)))
+        {
+            context.Out.WriteLine("  warning: " + warning);
+        }
+
         var findings = StopScreen.Screen(instance);
         if (findings.Count == 0)
         {

@@ -1,6 +1,10 @@
 namespace Anneal.Core.Model;
 
-/// <summary>Whether a rule may be broken, and the price of breaking it when it may.</summary>
+/// <summary>
+/// Whether a rule may be broken, and the price of breaking it when it may. A hard rule may carry a price too: for
+/// <see cref="RuleSet.Unserved"/> it is the price of leaving out an optional stop without a penalty of its own; the
+/// other rules ignore it while hard.
+/// </summary>
 public readonly record struct Rule(bool Hard, double Price)
 {
     public static Rule HardRule => new(true, 0);
@@ -19,7 +23,10 @@ public sealed record RuleSet
     public Rule ShiftEnd { get; init; } = Rule.HardRule;
     public Rule MaxDuration { get; init; } = Rule.HardRule;
 
-    /// <summary>Hard: mandatory stops must be served (optional ones may still be dropped at their penalty).</summary>
+    /// <summary>
+    /// Hard: mandatory stops must be served; optional ones may still be dropped, at their own penalty or else at this
+    /// rule's price. Soft: any stop may be dropped at its penalty, else at the price.
+    /// </summary>
     public Rule Unserved { get; init; } = Rule.HardRule;
 
     public static RuleSet AllHard { get; } = new();

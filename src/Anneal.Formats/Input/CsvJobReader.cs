@@ -29,7 +29,7 @@ public static class CsvJobReader
             settings);
         string name = Path.GetFileName(Path.TrimEndingDirectorySeparator(Path.GetFullPath(folder)));
         var instance = JobAssembler.Assemble(name, tables, problems);
-        return new LoadedInput(instance, tables.Settings.Job, Format, folder) { ReadAs = JobAssembler.ReadAs(tables) };
+        return new LoadedInput(instance, tables.Settings.Job, Format, folder) { ReadAs = JobAssembler.ReadAs(tables), Warnings = problems.Warnings };
     }
 
     private static SettingsFile ReadSettings(string folder, ProblemList problems)

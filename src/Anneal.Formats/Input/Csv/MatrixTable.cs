@@ -93,10 +93,11 @@ internal static class MatrixTable
         return -1;
     }
 
-    // A missing (b,a) is taken equal to (a,b); pairs missing both ways are listed.
+    // A missing (b,a) is taken equal to (a,b), with a warning that lists them; pairs missing both ways are problems.
     private static void FillReverse(CsvTable file, int n, double[] distance, double[] duration, int[] line, IReadOnlyList<string> names, ProblemList problems)
     {
         var missing = new List<(int A, int B)>();
+        var oneWay = new List<(int From, int To)>();
         for (int a = 0; a < n; a++)
         {
             for (int b = a + 1; b < n; b++)
@@ -106,11 +107,13 @@ internal static class MatrixTable
                 {
                     distance[ab] = distance[ba];
                     duration[ab] = duration[ba];
+                    oneWay.Add((b, a));
                 }
                 else if (line[ba] == 0 && line[ab] != 0)
                 {
                     distance[ba] = distance[ab];
                     duration[ba] = duration[ab];
+                    oneWay.Add((a, b));
                 }
                 else if (line[ab] == 0)
                 {
@@ -122,6 +125,17 @@ internal static class MatrixTable
         problems.AddCapped(missing, Shown,
             m => problems.Add(file, null, "from, to", $"{names[m.A]},{names[m.B]}", "the pair is missing (neither direction is given)", "add a line with from, to, distance and duration for it"),
             rest => problems.Add(file, null, null, null, $"{rest} more pairs are missing", "give every pair of distinct stops and depots at least in one direction"));
+        if (oneWay.Count > 0)
+        {
+            var shown = new List<string>();
+            for (int i = 0; i < oneWay.Count && i < Shown; i++)
+            {
+                shown.Add($"{Quote.Cap(names[oneWay[i].From])} -> {Quote.Cap(names[oneWay[i].To])}");
+            }
+
+            problems.Warnings.Add($"{file.File}: {oneWay.Count} pair(s) are given in one direction only ({string.Join(", ", shown)}{(oneWay.Count > Shown ? ", ..." : string.Empty)}); "
+                + "the way back is taken to be the same distance and duration. Give both directions where roads differ (one-way streets, turns).");
+        }
     }
 
     private static string Suggest(string id, IEnumerable<string> known, JobNames names)

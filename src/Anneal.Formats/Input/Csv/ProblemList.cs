@@ -9,6 +9,9 @@ internal sealed class ProblemList
 
     public IReadOnlyList<InputProblem> All => _problems;
 
+    /// <summary>Accepted but worth a word in `check` (see <see cref="LoadedInput.Warnings"/>).</summary>
+    public List<string> Warnings { get; } = [];
+
     public void Add(string file, int? row, string? column, string? value, string problem, string fix) =>
         _problems.Add(new InputProblem(file, row, column, value, problem, fix));
 

@@ -194,7 +194,7 @@ internal sealed record SettingsFile
                     Add(keyLine, $"rules.{name}.{priceKey}", v.Shown, "not a number", "give the price as a number, e.g. 2.5");
                     priceReported = true;
                 }
-                else if (v.Number > Limits.Price.Max)
+                else if (!Limits.Price.Contains(v.Number))
                 {
                     Add(keyLine, $"rules.{name}.{priceKey}", v.Shown, Limits.Problem(Limits.Price), Limits.Fix(Limits.Price, "the price"));
                     priceReported = true;
@@ -213,7 +213,9 @@ internal sealed record SettingsFile
                 return Rule.HardRule;
             }
 
-            return hard ? Rule.HardRule : Rule.Soft(price);
+            // A hard rule keeps its price: for unserved it is the price of leaving out an optional stop that has no penalty
+            // of its own; for the others it is unused, and `check` says so rather than dropping it silently.
+            return hard ? new Rule(true, price) : Rule.Soft(price);
         }
 
         private List<string>? Solvers(JsonTree value, int line)

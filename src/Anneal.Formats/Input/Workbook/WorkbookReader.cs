@@ -40,7 +40,7 @@ public static class WorkbookReader
             }
         }
 
-        return new LoadedInput(instance, settings.Job, Format, path) { ReadAs = "sheets " + string.Join(", ", used) };
+        return new LoadedInput(instance, settings.Job, Format, path) { ReadAs = "sheets " + string.Join(", ", used), Warnings = problems.Warnings };
     }
 
     private static CsvTable? Find(List<CsvTable> sheets, string name, bool required, string file, ProblemList problems)
