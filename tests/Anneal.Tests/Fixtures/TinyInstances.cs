@@ -101,7 +101,7 @@ internal static class TinyInstances
         var x = basis.Stops.Select(s => s.X).Append(30).ToArray();
         var y = basis.Stops.Select(s => s.Y).Append(30).ToArray();
         return new Instance("windows" + seed, list, basis.Depots, fleet, ["kg"], ["cold"], rules, Objective.Cost,
-            TravelTable.Planar(x, y, roundToInteger: true), "min");
+            TravelTable.Planar(x, y, roundToInteger: true), Units.Minutes);
     }
 
     /// <summary>
@@ -151,7 +151,7 @@ internal static class TinyInstances
             CostPerHour = 20,
         }).ToList();
         return new Instance("tight" + seed, list, [new Depot { Id = "hub", X = 10, Y = 7 }], fleet, ["trays"], [], RuleSet.AllHard, Objective.Cost,
-            TravelTable.Planar(x, y, roundToInteger: true), "min");
+            TravelTable.Planar(x, y, roundToInteger: true), Units.Minutes);
     }
 
     /// <summary>A hand-made instance: stops at the given points (depot at the origin), one-dimensional demand.</summary>
