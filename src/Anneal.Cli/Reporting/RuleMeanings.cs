@@ -9,7 +9,7 @@ public static class RuleMeanings
     public static IReadOnlyList<string> Lines(Instance instance)
     {
         var r = instance.Rules;
-        string unit = string.IsNullOrEmpty(instance.TimeUnit) ? "time unit" : instance.TimeUnit;
+        string unit = instance.Units.TimeWord;
         return
         [
             Line("time windows", r.TimeWindows, "service starts within a window (waiting allowed)", $"per {unit} late; lateness delays the rest of the route"),

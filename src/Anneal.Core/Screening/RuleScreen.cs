@@ -17,7 +17,7 @@ public static class RuleScreen
     {
         var warnings = new List<string>();
         var r = instance.Rules;
-        string unit = string.IsNullOrEmpty(instance.TimeUnit) ? "time unit" : instance.TimeUnit;
+        string unit = instance.Units.TimeWord;
         UnusedPrice("time windows", r.TimeWindows, "timeWindows", $"per {unit} late");
         UnusedPrice("capacity", r.Capacity, "capacity", "per unit over");
         UnusedPrice("shift end", r.ShiftEnd, "shiftEnd", $"per {unit} over");
