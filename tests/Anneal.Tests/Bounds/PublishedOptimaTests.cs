@@ -83,6 +83,6 @@ public sealed class PublishedOptimaTests
         }
 
         return new Instance(instance.Name, instance.Stops, instance.Depots, instance.Vehicles, instance.DimensionNames, instance.EquipmentNames,
-            instance.Rules, instance.Objective, TravelTable.FromMatrix(x, y, distance, (double[])distance.Clone()), instance.TimeUnit, instance.TimeUnitsPerHour);
+            instance.Rules, instance.Objective, TravelTable.FromMatrix(x, y, distance, (double[])distance.Clone()), instance.Units);
     }
 }
