@@ -1,5 +1,6 @@
 using Anneal.Core.Solving;
 using Anneal.Formats.Input;
+using Anneal.Search.Running;
 
 namespace Anneal.Jobs;
 
@@ -37,7 +38,7 @@ public sealed class JobRunner(SolverCatalog catalog)
 
     /// <param name="progress">Receives (solver name, trace point) from every solver as it improves, on the solvers' threads.</param>
     public JobRun Run(JobPlan plan, Action<string, TracePoint>? progress, CancellationToken cancel) =>
-        new(plan, RunCoordinator.Run(plan.Instance, plan.Solvers, plan.Options, progress, cancel));
+        new(plan, RunCoordinator.Run(plan.Instance, plan.Solvers, plan.Options, progress, cancel, ResultJudge.Judge));
 
     public JobRun Run(LoadedInput input, JobRequest request, Action<string, TracePoint>? progress, CancellationToken cancel) =>
         Run(Prepare(input, request), progress, cancel);

@@ -96,6 +96,11 @@ public sealed class ExactSolver : ISolver
             case CpSolverStatus.Infeasible:
                 result = SolverStatus.NoSolution;
                 notes = ["CP-SAT proved that its integer model has no plan that keeps every hard rule"];
+                if (keeper.Best is not null)
+                {
+                    notes.Add("its hint, Anneal's construction, is returned as its plan");
+                }
+
                 break;
             default:
                 result = cancel.IsCancellationRequested ? SolverStatus.Interrupted : keeper.Best is null ? SolverStatus.NoSolution : SolverStatus.TimeLimit;

@@ -26,7 +26,7 @@ public static class RunReport
     {
         var record = RunRecordFile.Read(Path.Combine(folder, RunRecordFile.FileName));
         var solvers = Solvers(record, ReadTraces(folder));
-        byte[]? convergence = WriteConvergence(folder, solvers);
+        byte[]? convergence = WriteConvergence(folder, solvers, record.Chosen);
         byte[]? routes = null, schedule = null;
         if (evaluation.VehiclesUsed > 0 || evaluation.Unserved.Count > 0)
         {
@@ -45,17 +45,20 @@ public static class RunReport
     }
 
     /// <summary>Only the convergence plot, which needs no instance (the fallback when the input has moved).</summary>
-    public static byte[]? WriteConvergence(string folder) =>
-        WriteConvergence(folder, Solvers(RunRecordFile.Read(Path.Combine(folder, RunRecordFile.FileName)), ReadTraces(folder)));
+    public static byte[]? WriteConvergence(string folder)
+    {
+        var record = RunRecordFile.Read(Path.Combine(folder, RunRecordFile.FileName));
+        return WriteConvergence(folder, Solvers(record, ReadTraces(folder)), record.Chosen);
+    }
 
-    private static byte[]? WriteConvergence(string folder, IReadOnlyList<SolverRun> solvers)
+    private static byte[]? WriteConvergence(string folder, IReadOnlyList<SolverRun> solvers, string? chosen)
     {
         if (solvers.Count == 0)
         {
             return null;
         }
 
-        using var plot = ConvergencePlot.Create(solvers);
+        using var plot = ConvergencePlot.Create(solvers, chosen);
         return PlotFile.Save(plot, folder, ConvergencePlot.FileStem, ConvergencePlot.Size);
     }
 

@@ -11,7 +11,7 @@ public static class CheckCommand
     public static Command Create(CliContext context)
     {
         var input = SharedOptions.Input();
-        var command = new Command("check", "Read an input and list every problem in it; exit 0 when it is valid, 2 when not.");
+        var command = new Command("check", "Read an input and list every problem in it; exit 0 when it is valid, 3 when valid but it cannot be fully served, 2 when not valid.");
         command.Arguments.Add(input);
         command.SetAction(parse => Execute(parse.GetValue(input)!, context));
         return command;
@@ -31,7 +31,16 @@ public static class CheckCommand
         }
 
         var instance = loaded.Instance;
-        context.Out.WriteLine($"{path}: valid ({loaded.Format}{(loaded.ReadAs is null ? string.Empty : ", " + loaded.ReadAs)})");
+        var obstacles = JobScreen.Screen(instance);
+        string dialect = loaded.Format + (loaded.ReadAs is null ? string.Empty : ", " + loaded.ReadAs);
+        context.Out.WriteLine(obstacles.Count == 0
+            ? $"{path}: valid ({dialect})"
+            : $"{path}: valid ({dialect}), but cannot be fully served: {InstanceDescription.Plural(obstacles.Count, "reason")}");
+        foreach (var o in obstacles)
+        {
+            context.Out.WriteLine("  - " + o.Message);
+        }
+
         context.Out.WriteLine("  " + InstanceDescription.Size(instance));
         context.Out.WriteLine("  " + InstanceDescription.Rules(instance));
         foreach (var line in RuleMeanings.Lines(instance))
@@ -44,20 +53,12 @@ public static class CheckCommand
             context.Out.WriteLine("  warning: " + warning);
         }
 
-        var findings = StopScreen.Screen(instance);
-        if (findings.Count == 0)
+        if (obstacles.Count == 0)
         {
-            context.Out.WriteLine("  screening: every stop can be served by at least one vehicle");
-        }
-        else
-        {
-            context.Out.WriteLine($"  screening: {findings.Count} stop(s) no vehicle can ever serve (they will be left unserved or break a hard rule):");
-            foreach (var f in findings)
-            {
-                context.Out.WriteLine($"    stop {f.StopId}: {f.Reason}");
-            }
+            context.Out.WriteLine("  screening: found nothing that rules out serving every stop (capacity, equipment, windows, shifts, durations)");
+            return ExitCodes.Success;
         }
 
-        return ExitCodes.Success;
+        return ExitCodes.Infeasible;
     }
 }

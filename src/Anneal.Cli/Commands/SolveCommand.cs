@@ -113,13 +113,13 @@ public static class SolveCommand
         }
 
         PrintSolvers(w, run.Outcome);
-        w.WriteLine($"Chosen: {best.Result.Solver}");
+        w.WriteLine(best.Result.HasPlan ? $"Chosen: {best.Result.Solver}" : "Chosen: none (no solver found a plan; the plan written serves no stop)");
         if (Proof(run.Outcome) is { } proof)
         {
             w.WriteLine(proof);
         }
 
-        PlanReport.Print(w, instance, best.Evaluation);
+        PlanReport.Print(w, instance, best.Evaluation, run.Plan.Seconds);
         w.WriteLine($"Written: {folder}");
         return run.Interrupted ? ExitCodes.Interrupted : best.Evaluation.Feasible ? ExitCodes.Success : ExitCodes.Infeasible;
     }
@@ -146,6 +146,9 @@ public static class SolveCommand
         return string.Create(CultureInfo.InvariantCulture, $"Lower bound {bound:0.00} ({by}): the plan is proved within {gap:0.0#}% of optimal.");
     }
 
+    /// <summary>Shown instead of a number for a solver that found no plan.</summary>
+    private const string NoValue = "—";
+
     private static void PrintSolvers(TextWriter w, RunOutcome outcome)
     {
         w.WriteLine("Solvers:");
@@ -156,8 +159,11 @@ public static class SolveCommand
             w.WriteLine(r.BoundOnly
                 ? string.Create(CultureInfo.InvariantCulture,
                     $"  {r.Solver,-12} lower bound {(r.LowerBound is { } lb ? lb.ToString("0.00", CultureInfo.InvariantCulture) : "none"),10}  (no plan)  reached at {r.SecondsToBest:0.0} of {r.Seconds:0.0} s  {r.Status.ToText()}")
+                : r.HasPlan
+                ? string.Create(CultureInfo.InvariantCulture,
+                    $"  {r.Solver,-12} objective {e.Objective,12:0.00}  vehicles {e.VehiclesUsed,3}  distance {e.Distance,10:0.00}  {(e.Feasible ? "feasible" : "infeasible"),-10}  best at {r.SecondsToBest:0.0} of {r.Seconds:0.0} s  {r.Status.ToText()}")
                 : string.Create(CultureInfo.InvariantCulture,
-                    $"  {r.Solver,-12} objective {e.Objective,12:0.00}  vehicles {e.VehiclesUsed,3}  distance {e.Distance,10:0.00}  {(e.Feasible ? "feasible" : "infeasible"),-10}  best at {r.SecondsToBest:0.0} of {r.Seconds:0.0} s  {r.Status.ToText()}"));
+                    $"  {r.Solver,-12} objective {NoValue,12}  vehicles {NoValue,3}  distance {NoValue,10}  {"no plan",-10}  ran {r.Seconds:0.0} s  {r.Status.ToText()}"));
             foreach (var note in r.Notes ?? [])
             {
                 w.WriteLine("      note: " + note);

@@ -1,6 +1,7 @@
 using System.Globalization;
 using Anneal.Core.Evaluation;
 using Anneal.Core.Model;
+using Anneal.Core.Screening;
 using Anneal.Formats.Output;
 
 namespace Anneal.Cli.Reporting;
@@ -8,7 +9,8 @@ namespace Anneal.Cli.Reporting;
 /// <summary>The printed verdict on a plan: objective and its parts, vehicles, distance, feasibility, every violation, the cautions.</summary>
 public static class PlanReport
 {
-    public static void Print(TextWriter w, Instance instance, PlanEvaluation e)
+    /// <param name="searchSeconds">The search budget, when a search made the plan (an infeasible plan then says the search found no better).</param>
+    public static void Print(TextWriter w, Instance instance, PlanEvaluation e, double? searchSeconds = null)
     {
         int hardCount = 0;
         foreach (var v in e.Violations)
@@ -40,7 +42,34 @@ public static class PlanReport
             }
         }
 
+        if (!e.Feasible)
+        {
+            PrintWhy(w, instance, searchSeconds);
+        }
+
         PrintCautions(w);
+    }
+
+    /// <summary>For an infeasible plan: what the screening says no plan can do, or that it found no single cause.</summary>
+    private static void PrintWhy(TextWriter w, Instance instance, double? searchSeconds)
+    {
+        var obstacles = JobScreen.Screen(instance);
+        if (obstacles.Count == 0)
+        {
+            if (searchSeconds is { } seconds)
+            {
+                w.WriteLine(string.Create(CultureInfo.InvariantCulture,
+                    $"Why: no solver found a plan that keeps every hard rule in {seconds:0.##} s, and the screening found no single cause; the rules may be too tight together for the fleet, or more time may find one."));
+            }
+
+            return;
+        }
+
+        w.WriteLine("Cannot be done, whatever the plan:");
+        foreach (var o in obstacles)
+        {
+            w.WriteLine("  - " + o.Message);
+        }
     }
 
     public static void PrintCautions(TextWriter w)

@@ -39,6 +39,12 @@ public sealed record PlanEvaluation(
 {
     public double Objective => Breakdown.Total;
 
+    /// <summary>
+    /// Stops that must be served (not optional, unserved rule hard) and are not served on a route that keeps every
+    /// hard rule: those on no route and those on a route that cannot be driven as planned.
+    /// </summary>
+    public int Stranded { get; init; }
+
     /// <summary>No hard rule is broken.</summary>
     public bool Feasible
     {

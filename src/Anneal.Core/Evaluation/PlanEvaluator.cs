@@ -20,6 +20,7 @@ public static class PlanEvaluator
         var routes = new List<RouteEvaluation>();
         var violations = new List<Violation>();
         var served = new bool[instance.StopCount];
+        int stranded = 0;
         double fixedCost = 0, distanceCost = 0, timeCost = 0, vehicles = 0, lateness = 0, overload = 0, overtime = 0, durationExcess = 0;
         int dims = instance.DimensionCount;
 
@@ -35,7 +36,13 @@ public static class PlanEvaluator
             }
 
             double objective = CostModel.RouteObjective(instance, route.Vehicle, m);
-            routes.Add(new RouteEvaluation(route.Vehicle, route.Stops, m, visits, loads, objective, CostModel.RouteFeasible(instance, m, Tolerance)));
+            bool drivable = CostModel.RouteFeasible(instance, m, Tolerance);
+            routes.Add(new RouteEvaluation(route.Vehicle, route.Stops, m, visits, loads, objective, drivable));
+            foreach (int s in route.Stops)
+            {
+                stranded += drivable || instance.MayDrop(s) ? 0 : 1;
+            }
+
             if (m.StopCount == 0)
             {
                 continue;
@@ -90,6 +97,7 @@ public static class PlanEvaluator
             unserved.Add(s);
             unservedCost += CostModel.UnservedObjective(instance, s);
             bool mayDrop = instance.MayDrop(s);
+            stranded += mayDrop ? 0 : 1;
             violations.Add(new Violation(RuleKind.Unserved, !mayDrop, null, instance.Stops[s].Id, 1,
                 mayDrop
                     ? $"stop {instance.Stops[s].Id} is left unserved (penalty {instance.UnservedPrice(s):0.##})"
@@ -108,7 +116,7 @@ public static class PlanEvaluator
             DurationExcess = durationExcess,
             Unserved = unservedCost,
         };
-        return new PlanEvaluation(routes, unserved, breakdown, violations);
+        return new PlanEvaluation(routes, unserved, breakdown, violations) { Stranded = stranded };
     }
 
     /// <summary>The search's cost of a plan under the given hard-rule weights.</summary>

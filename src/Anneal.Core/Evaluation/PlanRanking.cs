@@ -6,9 +6,12 @@ namespace Anneal.Core.Evaluation;
 /// <list type="number">
 /// <item>it exists (a solver that found no plan is never chosen over one that did);</item>
 /// <item>it keeps every hard rule;</item>
-/// <item>between plans that break hard rules: it serves more of the stops that must be served;</item>
-/// <item>then it breaks the other hard rules by less in all (minutes late or over the shift end or maximum duration,
-/// units over capacity and items of missing equipment, added up);</item>
+/// <item>between plans that break hard rules: it serves more of the stops that must be served on routes that keep
+/// every hard rule (<see cref="PlanEvaluation.Stranded"/>: a stop on a route that cannot be driven as planned is not
+/// served in any useful sense, so an overloaded van carrying the whole day does not beat a full one and a list of
+/// stops left over);</item>
+/// <item>then it breaks the hard rules other than serving by less in all (minutes late or over the shift end or
+/// maximum duration, units over capacity and items of missing equipment, added up);</item>
 /// <item>its objective is lower;</item>
 /// <item>its distance is shorter (an objective that cannot tell plans apart, such as a cost without prices);</item>
 /// <item>its duration is shorter.</item>
@@ -77,29 +80,19 @@ public static class PlanRanking
         return best;
     }
 
-    /// <summary>Stops that must be served but are not, and the summed amount of every other broken hard rule.</summary>
-    public static (int MissedStops, double Excess) HardBreaks(PlanEvaluation plan)
+    /// <summary>Stops that must be served but are not on a drivable route, and the summed amount of every other broken hard rule.</summary>
+    public static (int Stranded, double Excess) HardBreaks(PlanEvaluation plan)
     {
-        int missed = 0;
         double excess = 0;
         foreach (var v in plan.Violations)
         {
-            if (!v.Hard)
-            {
-                continue;
-            }
-
-            if (v.Rule == RuleKind.Unserved)
-            {
-                missed++;
-            }
-            else
+            if (v.Hard && v.Rule != RuleKind.Unserved)
             {
                 excess += v.Amount;
             }
         }
 
-        return (missed, excess);
+        return (plan.Stranded, excess);
     }
 
     /// <summary>Lower first; values within a relative 1e-9 of each other tie. NaN sorts last.</summary>

@@ -37,7 +37,8 @@ public static class StopScreen
 
             if (!served)
             {
-                findings.Add(new ScreenFinding(s, instance.Stops[s].Id, Explain(instance, s, failures)));
+                var (rule, reason) = Explain(instance, s, failures);
+                findings.Add(new ScreenFinding(s, instance.Stops[s].Id, rule, reason));
             }
         }
 
@@ -113,19 +114,22 @@ public static class StopScreen
             + instance.Travel.Duration(s, instance.DepotLocation(vehicle.EndDepot));
     }
 
-    private static string Explain(Instance instance, int s, int[] failures)
+    /// <summary>The rule every vehicle fails (several joined by "; "), or, when each fails a different one, how many fail which.</summary>
+    private static (string Rule, string Reason) Explain(Instance instance, int s, int[] failures)
     {
         int fleet = instance.Vehicles.Count;
         if (fleet == 0)
         {
-            return "there are no vehicles";
+            return ("fleet", "cannot be served: there are no vehicles");
         }
 
+        var rules = new List<string>();
         var reasons = new List<string>();
         for (int c = 0; c < CheckCount; c++)
         {
             if (failures[c] == fleet)
             {
+                rules.Add(RuleName((ScreenCheck)c));
                 reasons.Add(Reason(instance, s, (ScreenCheck)c));
             }
         }
@@ -141,10 +145,10 @@ public static class StopScreen
                 }
             }
 
-            reasons.Add("no single vehicle meets every requirement at once (" + string.Join(", ", parts) + ")");
+            return ("several", "cannot be served by any single vehicle: each falls short somewhere (" + string.Join(", ", parts) + ")");
         }
 
-        return string.Join("; ", reasons);
+        return (rules.Count == 1 ? rules[0] : "several", string.Join("; and it ", reasons));
     }
 
     private static string Label(ScreenCheck check) => check switch
@@ -156,6 +160,17 @@ public static class StopScreen
         _ => "the maximum duration",
     };
 
+    /// <summary>The rule's name as violations and summary.json spell it.</summary>
+    private static string RuleName(ScreenCheck check) => check switch
+    {
+        ScreenCheck.Capacity => "capacity",
+        ScreenCheck.Equipment => "equipment",
+        ScreenCheck.Window => "time-window",
+        ScreenCheck.ShiftEnd => "shift-end",
+        _ => "max-duration",
+    };
+
+    /// <summary>Why every vehicle fails this check, as words that follow "stop X ".</summary>
     private static string Reason(Instance instance, int s, ScreenCheck check)
     {
         var units = instance.Units;
@@ -165,19 +180,19 @@ public static class StopScreen
             case ScreenCheck.Capacity:
                 return CapacityReason(instance, s);
             case ScreenCheck.Equipment:
-                return $"needs {EquipmentList(instance, instance.Stops[s].Needs)} and no single vehicle offers all of them";
+                return EquipmentReason(instance, instance.Stops[s].Needs);
             case ScreenCheck.Window:
                 double arrival = Best(instance, v => EarliestArrival(instance, s, v), out _);
-                return $"the earliest any vehicle can arrive is {Clock(arrival)}, after its last window closes at {Clock(instance.Hull(s).Close)}";
+                return $"cannot be reached in time: the earliest any vehicle can arrive is {Clock(arrival)}, after its last window closes at {Clock(instance.Hull(s).Close)}";
             case ScreenCheck.ShiftEnd:
                 Best(instance, v => EarliestReturn(instance, s, v) - instance.Vehicles[v].ShiftEnd, out int bv);
-                return $"service cannot end in time to return to the end depot by the shift end: vehicle {instance.Vehicles[bv].Id} would be back at the earliest at "
-                    + $"{Clock(EarliestReturn(instance, s, bv))}, its shift ends at {Clock(instance.Vehicles[bv].ShiftEnd)}";
+                return $"cannot be served and left in time to be back by the shift end: vehicle {instance.Vehicles[bv].Id} would be back at "
+                    + $"{Clock(EarliestReturn(instance, s, bv))} at the earliest, its shift ends at {Clock(instance.Vehicles[bv].ShiftEnd)}";
             default:
                 Best(instance, v => ShortestRoute(instance, s, v) - instance.Vehicles[v].MaxDuration, out int dv);
                 string suffix = units.TimeSuffix;
-                return $"a route serving only this stop takes {Number(ShortestRoute(instance, s, dv))}{suffix}, more than the maximum duration "
-                    + $"{Number(instance.Vehicles[dv].MaxDuration)}{suffix} of vehicle {instance.Vehicles[dv].Id}";
+                return $"is too far for the maximum duration: there and back with its service takes {Number(ShortestRoute(instance, s, dv))}{suffix}, "
+                    + $"the longest route vehicle {instance.Vehicles[dv].Id} may drive is {Number(instance.Vehicles[dv].MaxDuration)}{suffix}";
         }
     }
 
@@ -186,16 +201,32 @@ public static class StopScreen
         var parts = new List<string>();
         for (int d = 0; d < instance.DimensionCount; d++)
         {
-            double largest = Best(instance, v => -instance.Capacity(v, d), out _);
-            if (instance.Demand(s, d) > -largest)
+            double largest = -Best(instance, v => -instance.Capacity(v, d), out _);
+            if (instance.Demand(s, d) > largest)
             {
-                parts.Add($"demand {Number(instance.Demand(s, d))} {DimensionName(instance, d)} is above every vehicle's capacity (largest {Number(-largest)})");
+                string name = DimensionName(instance, d);
+                parts.Add($"needs {Number(instance.Demand(s, d))} {name}; the largest vehicle carries {Number(largest)} {name}");
             }
         }
 
         return parts.Count > 0
-            ? string.Join("; ", parts)
-            : "no single vehicle has room for all of its demand at once (each falls short in some dimension)";
+            ? string.Join("; it ", parts)
+            : "does not fit any single vehicle: each is too small in some dimension";
+    }
+
+    /// <summary>Names the items no vehicle carries at all; else says no one vehicle carries the whole set.</summary>
+    private static string EquipmentReason(Instance instance, ulong needs)
+    {
+        ulong offered = 0;
+        foreach (var v in instance.Vehicles)
+        {
+            offered |= v.Equipment;
+        }
+
+        ulong missing = needs & ~offered;
+        return missing != 0
+            ? $"needs {EquipmentList(instance, missing)}; no vehicle carries {(System.Numerics.BitOperations.PopCount(missing) == 1 ? "it" : "them")}"
+            : $"needs {EquipmentList(instance, needs)}; no single vehicle carries all of them";
     }
 
     /// <summary>The smallest value of <paramref name="f"/> over the fleet, and the vehicle giving it.</summary>
@@ -216,7 +247,7 @@ public static class StopScreen
         return best;
     }
 
-    private static string EquipmentList(Instance instance, ulong bits)
+    internal static string EquipmentList(Instance instance, ulong bits)
     {
         var names = new List<string>();
         for (int i = 0; i < 64; i++)
@@ -230,8 +261,8 @@ public static class StopScreen
         return string.Join(" + ", names);
     }
 
-    private static string DimensionName(Instance instance, int d) =>
+    internal static string DimensionName(Instance instance, int d) =>
         d < instance.DimensionNames.Count ? instance.DimensionNames[d] : "units";
 
-    private static string Number(double x) => x.ToString("0.##", CultureInfo.InvariantCulture);
+    internal static string Number(double x) => x.ToString("#,0.##", CultureInfo.InvariantCulture);
 }

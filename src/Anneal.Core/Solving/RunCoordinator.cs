@@ -8,13 +8,16 @@ public static class RunCoordinator
 {
     /// <param name="solvers">Solver k runs with seed + k. One that declines the instance is not started.</param>
     /// <param name="progress">Receives (solver name, trace point) from every solver as it improves.</param>
+    /// <param name="judge">Judges each result (the host's may also offer a better form of an infeasible plan); by default the evaluator's verdict on the plan as it is.</param>
     public static RunOutcome Run(
         Instance instance,
         IReadOnlyList<ISolver> solvers,
         SolveOptions options,
         Action<string, TracePoint>? progress,
-        CancellationToken cancel)
+        CancellationToken cancel,
+        Func<Instance, SolverResult, JudgedResult>? judge = null)
     {
+        judge ??= static (instance, result) => new JudgedResult(result, PlanEvaluator.Evaluate(instance, result.Plan));
         var results = new SolverResult[solvers.Count];
         var threads = new List<Thread>(solvers.Count);
         for (int k = 0; k < solvers.Count; k++)
@@ -49,7 +52,7 @@ public static class RunCoordinator
         var judged = new JudgedResult[results.Length];
         for (int k = 0; k < results.Length; k++)
         {
-            judged[k] = new JudgedResult(results[k], PlanEvaluator.Evaluate(instance, results[k].Plan));
+            judged[k] = judge(instance, results[k]);
         }
 
         return new RunOutcome(judged, Choose(judged)) { Interrupted = cancel.IsCancellationRequested };

@@ -9,6 +9,7 @@ public sealed record SummaryDocument(
     string Format,
     string ObjectiveKind,
     PlanSummary Plan,
+    IReadOnlyList<ObstacleSummary> Screening,
     IReadOnlyList<SolverSummary> Solvers,
     string? Chosen,
     int? Seed,
@@ -43,13 +44,16 @@ public sealed record BreakdownSummary(
 
 public sealed record ViolationSummary(string Rule, bool Hard, string? Vehicle, string? Stop, double Amount, string Message);
 
-/// <summary>One solver's run, judged by the evaluator (not by the solver's own numbers).</summary>
-/// <param name="BoundOnly">The solver proves a bound and offers no plan: its plan fields describe an empty plan, not a result.</param>
+/// <summary>What the input screening found no plan can do, and why (the stop is null for the whole day).</summary>
+public sealed record ObstacleSummary(string Rule, string? Stop, string Message);
+
+/// <summary>One solver's run, judged by the evaluator (not by the solver's own numbers); objective, distance and vehicles are null when it found no plan.</summary>
+/// <param name="BoundOnly">The solver proves a bound and offers no plan.</param>
 public sealed record SolverSummary(
     string Solver,
-    double Objective,
-    double Distance,
-    int Vehicles,
+    double? Objective,
+    double? Distance,
+    int? Vehicles,
     bool Feasible,
     double SecondsToBest,
     double Seconds,

@@ -1,6 +1,5 @@
 using System.Text;
 using Anneal.Core.Evaluation;
-using Anneal.Core.Screening;
 using static Anneal.Reports.Html.Text;
 
 namespace Anneal.Reports.Html;
@@ -34,17 +33,17 @@ internal static class ProblemLists
 
     public static void Screening(StringBuilder h, ReportInput input)
     {
-        var findings = StopScreen.Screen(input.Instance);
-        if (findings.Count == 0)
+        var obstacles = input.Obstacles;
+        if (obstacles.Count == 0)
         {
-            h.Append("<p class=\"ok\">Every stop can be served by at least one vehicle.</p>");
+            h.Append("<p class=\"ok\">The screening found nothing that rules out serving every stop (capacity, equipment, windows, shifts, durations).</p>");
             return;
         }
 
-        h.Append("<p class=\"warn\">").Append(findings.Count).Append(" stop(s) no vehicle can ever serve without breaking a hard rule:</p><ul class=\"plain\">");
-        foreach (var f in findings)
+        h.Append("<p class=\"warn\">The day cannot be fully served, whatever the plan:</p><ul class=\"plain\" id=\"screening\">");
+        foreach (var o in obstacles)
         {
-            h.Append("<li>stop ").Append(E(f.StopId)).Append(": ").Append(E(f.Reason)).Append("</li>");
+            h.Append("<li>").Append(E(o.Message)).Append("</li>");
         }
 
         h.Append("</ul>");

@@ -1,5 +1,6 @@
 using Anneal.Core.Evaluation;
 using Anneal.Core.Model;
+using Anneal.Core.Screening;
 using Anneal.Formats.Output.Runs;
 using Anneal.Reports.Traces;
 
@@ -24,4 +25,9 @@ public sealed record ReportInput(Instance Instance, PlanEvaluation Plan, RunReco
             return null;
         }
     }
+
+    private IReadOnlyList<Obstacle>? _obstacles;
+
+    /// <summary>What the input screening finds no plan can do (computed once from the instance).</summary>
+    public IReadOnlyList<Obstacle> Obstacles => _obstacles ??= JobScreen.Screen(Instance);
 }

@@ -23,6 +23,8 @@ internal static class ReportStyles
         th { background: var(--band); font-weight: 600; font-size: 13px; }
         td.n, th.n { text-align: right; font-variant-numeric: tabular-nums; white-space: nowrap; }
         #solver-table td:first-child { white-space: nowrap; }
+        #solver-table td.status { overflow-wrap: anywhere; font-size: 13px; }
+        #solver-table th, #solver-table td { padding: 4px 6px; }
         tr.chosen td { font-weight: bold; }
         tr.late td { background: #fbeeed; }
         figure { margin: 10px 0 18px; }

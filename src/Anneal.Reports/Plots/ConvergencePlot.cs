@@ -8,7 +8,8 @@ namespace Anneal.Reports.Plots;
 /// Best objective against elapsed seconds (log axis), one line per solver: dotted while the best plan still breaks a
 /// hard rule, solid once feasible, a ring where it first became feasible; the strongest proven lower bound as a
 /// dashed line (a solver that only proves bounds draws its bound rising over time) and a note of the gap between the
-/// best plan and that bound.
+/// best plan and that bound. When values far above the best would squash it flat, the axis stops at
+/// <see cref="Focus"/> above the best and the note says what lies beyond.
 /// </summary>
 public static class ConvergencePlot
 {
@@ -18,13 +19,17 @@ public static class ConvergencePlot
     // Times at or below zero cannot sit on a log axis; the first samples are drawn at this many seconds.
     private const double EarliestSeconds = 0.001;
 
-    public static Plot Create(IReadOnlyList<SolverRun> solvers)
+    /// <summary>The axis shows at most this fraction above the best plan's objective (the last quarter is where solvers differ).</summary>
+    public const double Focus = 0.25;
+
+    /// <param name="chosen">The solver whose plan was written, named in the note; null to name the best line.</param>
+    public static Plot Create(IReadOnlyList<SolverRun> solvers, string? chosen = null)
     {
         var plot = new Plot();
         plot.Title("Best plan found so far");
         plot.XLabel("elapsed seconds (log scale)");
         plot.YLabel("objective");
-        double lo = double.PositiveInfinity, hi = double.NegativeInfinity;
+        double lo = double.PositiveInfinity, hi = double.NegativeInfinity, bestFinal = double.PositiveInfinity;
         for (int k = 0; k < solvers.Count; k++)
         {
             var s = solvers[k];
@@ -71,6 +76,7 @@ public static class ConvergencePlot
             }
 
             lo = Math.Min(lo, ys[^1]);
+            bestFinal = Math.Min(bestFinal, ys[^1]);
         }
 
         var bound = Bound(solvers);
@@ -81,7 +87,15 @@ public static class ConvergencePlot
             lo = Math.Min(lo, b.Value);
         }
 
-        var note = plot.Add.Annotation(Note(solvers, bound), Alignment.UpperRight);
+        string? cut = null;
+        if (double.IsFinite(bestFinal) && double.IsFinite(hi) && hi > bestFinal + (Math.Abs(bestFinal) * Focus) && Math.Abs(bestFinal) > 1e-9)
+        {
+            double top = bestFinal + (Math.Abs(bestFinal) * Focus);
+            cut = Cut(solvers, top);
+            hi = top;
+        }
+
+        var note = plot.Add.Annotation(Note(solvers, bound, chosen) + (cut is null ? string.Empty : "\n" + cut), Alignment.UpperRight);
         note.LabelStyle.BackgroundColor = Colors.White;
         note.LabelStyle.BorderColor = Colors.Gray;
         note.LabelStyle.ShadowColor = Colors.Transparent;
@@ -90,7 +104,7 @@ public static class ConvergencePlot
         if (double.IsFinite(lo) && double.IsFinite(hi))
         {
             double pad = Math.Max((hi - lo) * 0.08, Math.Max(Math.Abs(lo) * 0.002, 1e-6));
-            plot.Axes.SetLimitsY(lo - pad, hi + (3 * pad));
+            plot.Axes.SetLimitsY(lo - pad, hi + ((cut is null ? 3 : 1) * pad));
         }
 
         plot.Legend.Alignment = Alignment.LowerLeft;
@@ -157,34 +171,50 @@ public static class ConvergencePlot
         return best;
     }
 
-    private static string Note(IReadOnlyList<SolverRun> solvers, (string Solver, double Value)? bound)
+    /// <summary>What the focused axis leaves out: every solver whose final plan lies above it, and the early values.</summary>
+    private static string Cut(IReadOnlyList<SolverRun> solvers, double top)
+    {
+        var above = new List<string>();
+        foreach (var s in solvers)
+        {
+            if (s.Objective is { } o && o > top)
+            {
+                above.Add(string.Create(CultureInfo.InvariantCulture, $"{s.Solver} {o:#,0.##}"));
+            }
+        }
+
+        string what = above.Count == 0 ? "earlier values" : "earlier values and the final plans of " + string.Join(", ", above);
+        return string.Create(CultureInfo.InvariantCulture, $"axis cut at {top:#,0.##} ({Focus:P0} above the best):\n{what} lie above");
+    }
+
+    private static string Note(IReadOnlyList<SolverRun> solvers, (string Solver, double Value)? bound, string? chosen)
     {
         SolverRun? best = null;
         foreach (var s in solvers)
         {
-            if (s.BoundOnly)
+            if (s.BoundOnly || s.Objective is null)
             {
                 continue;
             }
 
-            if (best is null || (s.Feasible && !best.Feasible) || (s.Feasible == best.Feasible && s.Objective < best.Objective))
+            if (chosen is not null ? s.Solver == chosen : best is null || (s.Feasible && !best.Feasible) || (s.Feasible == best.Feasible && s.Objective < best.Objective))
             {
                 best = s;
             }
         }
 
-        if (best is null)
+        if (best?.Objective is not { } objective)
         {
-            return "no solver reported";
+            return "no solver found a plan";
         }
 
-        string head = string.Create(CultureInfo.InvariantCulture, $"best {best.Objective:0.##} ({best.Solver}{(best.Feasible ? string.Empty : ", infeasible")})");
+        string head = string.Create(CultureInfo.InvariantCulture, $"{(chosen is null ? "best" : "chosen")} {objective:#,0.##} ({best.Solver}{(best.Feasible ? string.Empty : ", infeasible")})");
         if (bound is not { } b)
         {
             return head + "\nno lower bound proved: the gap to optimal is unknown";
         }
 
-        double? gap = TraceFacts.GapPercent(best.Objective, b.Value);
-        return head + string.Create(CultureInfo.InvariantCulture, $"\nlower bound {b.Value:0.##} ({b.Solver})\ngap at most {gap:0.0#}%");
+        double? gap = TraceFacts.GapPercent(objective, b.Value);
+        return head + string.Create(CultureInfo.InvariantCulture, $"\nlower bound {b.Value:#,0.##} ({b.Solver})\ngap at most {gap:0.0#}%");
     }
 }

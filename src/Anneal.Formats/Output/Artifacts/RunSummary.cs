@@ -1,5 +1,6 @@
 using Anneal.Core.Evaluation;
 using Anneal.Core.Model;
+using Anneal.Core.Screening;
 using Anneal.Core.Solving;
 using Anneal.Formats.Input;
 
@@ -16,11 +17,19 @@ public static class RunSummary
         {
             var r = judged.Result;
             var e = judged.Evaluation;
-            solvers.Add(new SolverSummary(r.Solver, e.Objective, e.Distance, e.VehiclesUsed, e.Feasible, r.SecondsToBest, r.Seconds, r.Status.ToText(), r.LowerBound, r.Notes ?? [], r.BoundOnly));
+            bool has = r.HasPlan;
+            solvers.Add(new SolverSummary(r.Solver, has ? e.Objective : null, has ? e.Distance : null, has ? e.VehiclesUsed : null, has && e.Feasible,
+                r.SecondsToBest, r.Seconds, r.Status.ToText(), r.LowerBound, r.Notes ?? [], r.BoundOnly));
             if (r.LowerBound is { } b && double.IsFinite(b) && (lowerBound is null || b > lowerBound))
             {
                 lowerBound = b;
             }
+        }
+
+        var screening = new List<ObstacleSummary>();
+        foreach (var o in JobScreen.Screen(instance))
+        {
+            screening.Add(new ObstacleSummary(o.Rule, o.Stop, o.Message));
         }
 
         return new SummaryDocument(
@@ -28,8 +37,9 @@ public static class RunSummary
             input.Format,
             instance.Objective.ToText(),
             SummaryJsonWriter.Describe(instance, plan),
+            screening,
             solvers,
-            outcome?.Best.Result.Solver,
+            outcome is { Best.Result.HasPlan: true } ? outcome.Best.Result.Solver : null,
             facts.Seed,
             facts.TimeLimitSeconds,
             facts.Interrupted,

@@ -46,20 +46,22 @@ public class PlanRankingTests
     }
 
     [Fact]
-    public void Among_infeasible_plans_more_mandatory_stops_served_comes_first()
+    public void Among_infeasible_plans_more_stops_served_on_drivable_routes_comes_first()
     {
-        var allServed = Judge(Small, [0, 1, 2]);    // every stop, 40 kg over
-        var oneLeftOut = Judge(Small, [0], [1]);    // C on no route, nothing else broken
-        Assert.Equal((0, 40), PlanRanking.HardBreaks(allServed));
-        Assert.Equal((1, 0), PlanRanking.HardBreaks(oneLeftOut));
-        Assert.True(PlanRanking.IsBetter(allServed, oneLeftOut));
+        var crammed = Judge(Small, [0, 1, 2]);      // every stop on one van, 40 kg over: none of them can be driven as planned
+        var leftOver = Judge(Small, [0], [1]);      // A and B on drivable routes, C on no route
+        Assert.Equal((3, 40), PlanRanking.HardBreaks(crammed));
+        Assert.Equal((1, 0), PlanRanking.HardBreaks(leftOver));
+        Assert.True(PlanRanking.IsBetter(leftOver, crammed));
     }
 
     [Fact]
     public void Then_the_smaller_hard_excess_even_at_a_higher_objective()
     {
-        var lessOver = Judge(Small, [0, 1], [2]);   // 20 kg over, two vans
-        var moreOver = Judge(Small, [0, 1, 2]);     // 40 kg over, one van
+        var moreOver = Judge(Small, [0, 1], [2]);   // A + B: 70 kg, 20 over; C alone
+        var lessOver = Judge(Small, [0], [1, 2]);   // B + C: 60 kg, 10 over; A alone
+        Assert.Equal((2, 20), PlanRanking.HardBreaks(moreOver));
+        Assert.Equal((2, 10), PlanRanking.HardBreaks(lessOver));
         Assert.True(lessOver.Objective > moreOver.Objective);
         Assert.True(PlanRanking.IsBetter(lessOver, moreOver));
     }

@@ -45,8 +45,8 @@ public class StopScreenTests
         var f = Assert.Single(StopScreen.Screen(inst));
         Assert.Equal(1, f.StopIndex);
         Assert.Equal("big", f.StopId);
-        Assert.Contains("30 kg", f.Reason);
-        Assert.Contains("largest 25", f.Reason);
+        Assert.Equal("capacity", f.Rule);
+        Assert.Equal("stop big needs 30 kg; the largest vehicle carries 25 kg", f.Message);
     }
 
     [Fact]
@@ -55,7 +55,7 @@ public class StopScreenTests
         // cold on one vehicle and lift on another: neither serves a stop that needs both.
         var inst = Build([S("both", 10, needs: 3)], [V("c", 10, equipment: 1), V("l", 10, equipment: 2)]);
         var f = Assert.Single(StopScreen.Screen(inst));
-        Assert.Contains("cold + lift", f.Reason);
+        Assert.Equal("stop both needs cold + lift; no single vehicle carries all of them", f.Message);
     }
 
     [Fact]
@@ -97,6 +97,7 @@ public class StopScreenTests
         // v1 is big but lacks the equipment; v2 has it but is too small.
         var inst = Build([S("x", 10, kg: 8, needs: 1)], [V("v1", 10), V("v2", 5, equipment: 1)]);
         var f = Assert.Single(StopScreen.Screen(inst));
-        Assert.Contains("no single vehicle", f.Reason);
+        Assert.Equal("several", f.Rule);
+        Assert.Contains("cannot be served by any single vehicle", f.Reason);
     }
 }

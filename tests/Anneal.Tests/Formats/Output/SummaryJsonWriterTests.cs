@@ -14,6 +14,7 @@ public sealed class SummaryJsonWriterTests : TempFolderTest
         var evaluation = PlanEvaluator.Evaluate(instance, new Plan([new PlannedRoute(0, [0, 1])]));
         var document = new SummaryDocument(
             instance.Name, "csv-job", "cost", SummaryJsonWriter.Describe(instance, evaluation),
+            [new ObstacleSummary("capacity", null, "the day's 90 kg exceed the fleet's 80 kg")],
             [new SolverSummary("insertion", evaluation.Objective, evaluation.Distance, 1, evaluation.Feasible, 0.1, 0.2, "completed", null, [])],
             "insertion", 7, 5, false, Cautions.All, new DateTimeOffset(2026, 1, 2, 3, 4, 5, TimeSpan.Zero));
         string path = Path.Combine(Dir, SummaryJsonWriter.FileName);
@@ -22,7 +23,7 @@ public sealed class SummaryJsonWriterTests : TempFolderTest
 
         using var json = JsonDocument.Parse(File.ReadAllText(path));
         var root = json.RootElement;
-        foreach (var field in new[] { "instance", "format", "objectiveKind", "plan", "solvers", "chosen", "seed", "timeLimitSeconds", "interrupted", "cautions", "generatedAt" })
+        foreach (var field in new[] { "instance", "format", "objectiveKind", "plan", "screening", "solvers", "chosen", "seed", "timeLimitSeconds", "interrupted", "cautions", "generatedAt" })
         {
             Assert.True(root.TryGetProperty(field, out _), field);
         }
@@ -45,6 +46,10 @@ public sealed class SummaryJsonWriterTests : TempFolderTest
         }
 
         Assert.Equal(JsonValueKind.Null, solver.GetProperty("lowerBound").ValueKind);
+        var obstacle = root.GetProperty("screening")[0];
+        Assert.Equal("capacity", obstacle.GetProperty("rule").GetString());
+        Assert.Equal(JsonValueKind.Null, obstacle.GetProperty("stop").ValueKind);
+        Assert.Equal("the day's 90 kg exceed the fleet's 80 kg", obstacle.GetProperty("message").GetString());
         Assert.Equal(["C"], plan.GetProperty("unserved").EnumerateArray().Select(e => e.GetString()));
         Assert.Equal("unserved", plan.GetProperty("violations")[0].GetProperty("rule").GetString());
         Assert.Equal(Cautions.All.Count, root.GetProperty("cautions").GetArrayLength());
