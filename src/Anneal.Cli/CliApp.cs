@@ -18,14 +18,16 @@ public static class CliApp
         {
             var root = BuildRoot(context);
             var parsed = root.Parse(args);
-            if (parsed.Errors.Count > 0)
+            var mistakes = UsageErrors.Describe(parsed);
+            if (mistakes.Count > 0)
             {
-                foreach (var error in parsed.Errors)
+                foreach (var line in mistakes)
                 {
-                    context.Err.WriteLine("anneal: " + error.Message);
+                    context.Err.WriteLine("anneal: " + line);
                 }
 
-                context.Err.WriteLine("Try 'anneal --help' or 'anneal <command> --help'.");
+                var command = parsed.CommandResult.Command;
+                context.Err.WriteLine(command is RootCommand ? "Try 'anneal --help' or 'anneal <command> --help'." : $"Try '{UsageErrors.Name(command)} --help'.");
                 return ExitCodes.InvalidInput;
             }
 

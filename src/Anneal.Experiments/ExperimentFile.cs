@@ -1,6 +1,7 @@
 using System.Globalization;
 using System.Text.Json;
 using Anneal.Formats.Input;
+using Anneal.Formats.Input.Json;
 
 namespace Anneal.Experiments;
 
@@ -31,49 +32,61 @@ public sealed record ExperimentFile
     /// <exception cref="InputException">when the file is missing, not JSON, or a key holds the wrong kind of value.</exception>
     public static ExperimentFile Read(string path)
     {
-        string text;
+        byte[] bytes;
         try
         {
-            text = File.ReadAllText(path);
+            bytes = File.ReadAllBytes(path);
+        }
+        catch (Exception e) when (e is FileNotFoundException or DirectoryNotFoundException)
+        {
+            throw new InputException(new InputProblem(path, null, null, null, "there is no experiment file here", "give the path of a JSON experiment file"));
         }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException)
         {
-            throw new InputException(new InputProblem(path, null, null, null, "the experiment file cannot be read: " + e.Message, "give the path of a JSON experiment file"));
+            throw new InputException(new InputProblem(path, null, null, null, "the experiment file cannot be read: " + Anneal.Formats.FileTrouble.Reading(path, e),
+                "give the path of a JSON experiment file"));
         }
 
-        JsonDocument doc;
+        JsonTree root;
         try
         {
-            doc = JsonDocument.Parse(text, new JsonDocumentOptions { CommentHandling = JsonCommentHandling.Skip, AllowTrailingCommas = true });
+            root = JsonTree.Parse(bytes);
         }
-        catch (JsonException e)
+        catch (JsonSyntaxException e)
         {
-            throw new InputException(new InputProblem(path, (int?)(e.LineNumber + 1), null, null, "not valid JSON: " + e.Message, "write one JSON object, e.g. {\"instances\": [\"bench/solomon\"], \"solvers\": [\"sa\"]}"));
+            throw new InputException(e.Problem(path, "mend the JSON at that place; an experiment is one object, e.g. {\"instances\": [\"bench/solomon\"], \"solvers\": [\"sa\"]}"));
         }
 
-        using (doc)
-        {
-            return Parse(doc.RootElement, path, Path.GetDirectoryName(Path.GetFullPath(path)) ?? ".");
-        }
+        return Parse(root, path, Path.GetDirectoryName(Path.GetFullPath(path)) ?? ".");
     }
 
-    private static ExperimentFile Parse(JsonElement root, string path, string folder)
+    private static ExperimentFile Parse(JsonTree root, string path, string folder)
     {
         var problems = new List<InputProblem>();
-        if (root.ValueKind != JsonValueKind.Object)
+        if (!root.IsObject)
         {
-            throw new InputException(new InputProblem(path, null, null, null, "the experiment is not a JSON object", "write { \"instances\": [...], ... }"));
+            throw new InputException(new InputProblem(path, root.Line, null, root.Shown, "the experiment is not a JSON object", "write { \"instances\": [...], ... }") { Position = root.Column });
         }
 
-        foreach (var property in root.EnumerateObject())
+        var values = new Dictionary<string, (int Line, int Column, JsonTree Value)>(StringComparer.Ordinal);
+        foreach (var (key, line, column, value) in root.Members)
         {
-            if (!Keys.Contains(property.Name, StringComparer.Ordinal))
+            if (!Keys.Contains(key, StringComparer.Ordinal))
             {
-                problems.Add(new(path, null, property.Name, null, "unknown key", "use only " + string.Join(", ", Keys)));
+                var near = Closest.Find(key, Keys);
+                problems.Add(new(path, line, null, null, "unknown key", (near is not null ? $"did you mean '{near}'? " : string.Empty) + "the keys are " + string.Join(", ", Keys))
+                {
+                    JsonPath = key,
+                    Position = column,
+                });
+            }
+            else if (!values.TryAdd(key, (line, column, value)))
+            {
+                problems.Add(new(path, line, null, null, "the key appears twice", "keep one of them") { JsonPath = key, Position = column });
             }
         }
 
-        var reader = new Fields(root, path, problems);
+        var reader = new Fields(values, path, problems);
         var file = new ExperimentFile
         {
             Instances = (reader.Strings("instances") ?? []).Select(p => Resolve(folder, p)).ToList(),
@@ -97,12 +110,13 @@ public sealed record ExperimentFile
 
     private static string Resolve(string folder, string path) => Path.IsPathRooted(path) ? path : Path.Combine(folder, path);
 
-    /// <summary>Typed reads of optional keys; a wrong kind of value becomes a problem naming the key.</summary>
-    private sealed class Fields(JsonElement root, string path, List<InputProblem> problems)
+    /// <summary>Typed reads of optional keys; a wrong kind of value becomes a problem naming the key and its place.</summary>
+    private sealed class Fields(Dictionary<string, (int Line, int Column, JsonTree Value)> values, string path, List<InputProblem> problems)
     {
-        public string? Text(string key) => Get(key) is { } e ? e.ValueKind == JsonValueKind.String ? e.GetString() : Bad<string>(key, e, "a string") : null;
+        public string? Text(string key) => Get(key) is { } e ? e.Kind == JsonTokenType.String ? e.Text : Bad<string>(key, e, "a string") : null;
 
-        public long? Whole(string key) => Get(key) is { } e ? e.ValueKind == JsonValueKind.Number && e.TryGetInt64(out long v) ? v : Bad<long>(key, e, "a whole number") : null;
+        public long? Whole(string key) =>
+            Get(key) is { } e ? e.Kind == JsonTokenType.Number && e.Number == Math.Floor(e.Number) && Math.Abs(e.Number) < 1e15 ? (long)e.Number : Bad<long>(key, e, "a whole number") : null;
 
         /// <summary>A list of strings; one comma-separated string is accepted too (as on the command line).</summary>
         public IReadOnlyList<string>? Strings(string key)
@@ -112,14 +126,14 @@ public sealed record ExperimentFile
                 return null;
             }
 
-            if (e.ValueKind == JsonValueKind.String)
+            if (e.Kind == JsonTokenType.String)
             {
-                return e.GetString()!.Split(',', StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries);
+                return e.Text!.Split(',', StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries);
             }
 
-            if (e.ValueKind == JsonValueKind.Array && e.EnumerateArray().All(x => x.ValueKind == JsonValueKind.String))
+            if (e.Kind == JsonTokenType.StartArray && e.Items.All(x => x.Kind == JsonTokenType.String))
             {
-                return e.EnumerateArray().Select(x => x.GetString()!).ToList();
+                return e.Items.Select(x => x.Text!).ToList();
             }
 
             return Bad<IReadOnlyList<string>>(key, e, "a list of strings");
@@ -132,24 +146,28 @@ public sealed record ExperimentFile
                 return null;
             }
 
-            if (e.ValueKind == JsonValueKind.Number)
+            if (e.Kind == JsonTokenType.Number)
             {
-                return [e.GetDouble()];
+                return [e.Number];
             }
 
-            if (e.ValueKind == JsonValueKind.Array && e.EnumerateArray().All(x => x.ValueKind == JsonValueKind.Number))
+            if (e.Kind == JsonTokenType.StartArray && e.Items.All(x => x.Kind == JsonTokenType.Number))
             {
-                return e.EnumerateArray().Select(x => x.GetDouble()).ToList();
+                return e.Items.Select(x => x.Number).ToList();
             }
 
             return Bad<IReadOnlyList<double>>(key, e, "a number or a list of numbers (seconds)");
         }
 
-        private JsonElement? Get(string key) => root.TryGetProperty(key, out var e) && e.ValueKind != JsonValueKind.Null ? e : null;
+        private JsonTree? Get(string key) => values.TryGetValue(key, out var v) && v.Value.Kind != JsonTokenType.Null ? v.Value : null;
 
-        private T? Bad<T>(string key, JsonElement e, string wanted)
+        private T? Bad<T>(string key, JsonTree e, string wanted)
         {
-            problems.Add(new InputProblem(path, null, key, e.GetRawText(), "not " + wanted, string.Create(CultureInfo.InvariantCulture, $"give {key} as {wanted}")));
+            problems.Add(new InputProblem(path, e.Line, null, e.Shown, "not " + wanted, string.Create(CultureInfo.InvariantCulture, $"give {key} as {wanted}"))
+            {
+                JsonPath = key,
+                Position = e.Column,
+            });
             return default;
         }
     }

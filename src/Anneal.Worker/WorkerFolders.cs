@@ -28,7 +28,7 @@ public sealed record WorkerFolders(string Inbox, string Outbox, string Working, 
             }
             catch (Exception e) when (e is IOException or UnauthorizedAccessException)
             {
-                throw OutputException.For(path, e);
+                throw OutputException.ForFolder(path, e);
             }
         }
     }

@@ -48,7 +48,8 @@ public static class WorkerHost
         services.AddSingleton(run);
         services.AddSingleton(TimeProvider.System);
         services.AddSingleton<IValidateOptions<WorkerOptions>, WorkerOptionsValidator>();
-        services.AddOptions<WorkerOptions>().Bind(builder.Configuration.GetSection(WorkerOptions.Section)).ValidateOnStart();
+        services.AddSingleton(new WorkerSettingsText(builder.Configuration));
+        services.AddOptions<WorkerOptions>().Configure<WorkerSettingsText>((options, text) => text.Apply(options)).ValidateOnStart();
         services.AddOptions<HostOptions>().Configure<IOptions<WorkerOptions>>((host, worker) =>
             host.ShutdownTimeout = TimeSpan.FromSeconds(worker.Value.ShutdownTimeoutSeconds));
         services.Configure<ConsoleLifetimeOptions>(o => o.SuppressStatusMessages = true);

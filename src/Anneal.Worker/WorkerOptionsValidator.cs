@@ -4,11 +4,12 @@ using Microsoft.Extensions.Options;
 namespace Anneal.Worker;
 
 /// <summary>Refuses settings that would only fail later, at start-up, with every problem named at once.</summary>
-public sealed class WorkerOptionsValidator(SolverCatalog catalog) : IValidateOptions<WorkerOptions>
+public sealed class WorkerOptionsValidator(SolverCatalog catalog, WorkerSettingsText? text = null) : IValidateOptions<WorkerOptions>
 {
     public ValidateOptionsResult Validate(string? name, WorkerOptions options)
     {
-        var problems = new List<string>();
+        // Values of the wrong kind first (they kept their defaults below), then the ranges and folders.
+        var problems = new List<string>(text?.Problems ?? []);
         Folder(problems, options.Inbox, "Inbox", "--inbox DIR", required: true);
         Folder(problems, options.Outbox, "Outbox", "--outbox DIR", required: true);
         Folder(problems, options.Working, "Working", null, required: false);

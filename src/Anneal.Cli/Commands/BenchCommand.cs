@@ -22,14 +22,14 @@ public static class BenchCommand
         var inputs = new Argument<string[]>("inputs") { Description = "Benchmark files, folders of them, CSV job folders, or globs of these (optional with --experiment).", Arity = ArgumentArity.ZeroOrMore };
         var experiment = new Option<string?>("--experiment") { Description = "JSON experiment file (instances, solvers, seeds, budgets, objective, reference, jobs, out); options given here override it.", HelpName = "file" };
         var solvers = new Option<string>("--solvers") { Description = "Comma-separated solver names.", DefaultValueFactory = _ => "sa,tabu", HelpName = "list" };
-        var seeds = new Option<int>("--seeds") { Description = "Seeds per solver, instance and budget (1, 2, …).", DefaultValueFactory = _ => 3, HelpName = "n" };
-        var time = new Option<string>("--time") { Description = "Wall-clock budget per run in seconds; several, comma-separated, run each.", DefaultValueFactory = _ => "10", HelpName = "s[,s…]" };
-        var iterations = new Option<long?>("--iterations") { Description = "Also stop each run after this many iterations.", HelpName = "n" };
+        var seeds = OptionValues.Whole("--seeds", "Seeds per solver, instance and budget (1, 2, …).", 1, 3);
+        var time = OptionValues.SecondsList("--time", "Wall-clock budget per run in seconds; several, comma-separated, run each.", "10");
+        var iterations = OptionValues.Count("--iterations", "Also stop each run after this many iterations.", 1);
         var objective = SharedOptions.Objective();
         var reference = new Option<string?>("--reference") { Description = "CSV of best-known values (the format of ../shared/benchmarks/bks.csv); without one, gaps are to the best found in the experiment.", HelpName = "csv" };
-        var jobs = new Option<int>("--jobs") { Description = "Runs at once, one solver per core; more than the cores makes timings unfair.", DefaultValueFactory = _ => 1, HelpName = "n" };
+        var jobs = OptionValues.Whole("--jobs", "Runs at once, one solver per core; more than the cores makes timings unfair.", 1, 1);
         var output = SharedOptions.Out("Output folder; running again into the same folder skips runs already in its results.csv. Default: runs/bench-<yyyyMMdd-HHmmss>.");
-        var throughput = new Option<double>("--throughput-seconds") { Description = "Seconds spent measuring move evaluations per second on the largest instance (0 skips it).", DefaultValueFactory = _ => 2, HelpName = "seconds" };
+        var throughput = OptionValues.Seconds("--throughput-seconds", "Seconds spent measuring move evaluations per second on the largest instance (0 skips it).", 2, zero: true);
         var quiet = new Option<bool>("--quiet") { Description = "No line per finished run." };
         var command = new Command("bench", "Compare solvers: an experiment of instances × solvers × seeds × budgets; results.csv, statistics, pictures and a summary.");
         command.Arguments.Add(inputs);
@@ -47,7 +47,7 @@ public static class BenchCommand
                 : file.Solvers.ToArray();
             var known = context.Services.GetRequiredService<JobRunner>().Catalog.Known(names);
 
-            var budgets = Given(time) || file.Budgets is null ? ParseBudgets(parse.GetValue(time)!) : file.Budgets;
+            var budgets = Given(time) || file.Budgets is null ? OptionValues.BenchBudgets(parse.GetValue(time)!) : file.Budgets;
             int seedCount = Given(seeds) ? parse.GetValue(seeds) : file.Seeds ?? parse.GetValue(seeds);
             int jobCount = Given(jobs) ? parse.GetValue(jobs) : file.Jobs ?? parse.GetValue(jobs);
             if (seedCount < 1 || jobCount < 1 || budgets is null || budgets.Count == 0 || budgets.Any(b => !(b > 0)))
@@ -93,23 +93,6 @@ public static class BenchCommand
             return Execute(loaded, settings, refs, referencePath, folder, parse.GetValue(throughput), parse.GetValue(quiet), context);
         });
         return command;
-    }
-
-    /// <summary>"5,30" → [5, 30]; null when a part is not a number.</summary>
-    public static IReadOnlyList<double>? ParseBudgets(string text)
-    {
-        var budgets = new List<double>();
-        foreach (var part in text.Split(',', StringSplitOptions.RemoveEmptyEntries | StringSplitOptions.TrimEntries))
-        {
-            if (!double.TryParse(part, NumberStyles.Float, CultureInfo.InvariantCulture, out double b))
-            {
-                return null;
-            }
-
-            budgets.Add(b);
-        }
-
-        return budgets;
     }
 
     public static int Execute(IReadOnlyList<LoadedInput> inputs, BenchSettings settings, ReferenceValues refs, string? referencePath, string folder, double throughputSeconds, bool quiet, CliContext context)

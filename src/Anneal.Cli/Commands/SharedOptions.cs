@@ -12,16 +12,9 @@ public static class SharedOptions
         Description = "A CSV job folder, an .xlsx workbook, a Solomon .txt file or a CVRPLIB .vrp file.",
     };
 
-    public static Option<string?> Objective()
-    {
-        var option = new Option<string?>("--objective")
-        {
-            Description = $"What to minimise: {ObjectiveNames.Accepted}. Default: the job's settings, else the format's convention.",
-            HelpName = "kind",
-        };
-        option.AcceptOnlyFromAmong("cost", "distance", "vehicles-then-distance");
-        return option;
-    }
+    public static Option<string?> Objective() => OptionValues.Choice("--objective",
+        $"What to minimise: {ObjectiveNames.Accepted}. Default: the job's settings, else the format's convention.", "kind",
+        "cost", "distance", "vehicles-then-distance");
 
     public static Option<string?> Out(string description) => new("--out")
     {

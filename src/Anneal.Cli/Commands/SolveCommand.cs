@@ -18,12 +18,12 @@ public static class SolveCommand
     {
         var input = SharedOptions.Input();
         var solvers = new Option<string?>("--solvers") { Description = "Comma-separated solver names, e.g. sa,tabu. Default: the job's list, else all that apply.", HelpName = "list" };
-        var time = new Option<double?>("--time") { Description = $"Wall-clock budget in seconds. Default: the job's timeSeconds, else {DefaultTimeSeconds}.", HelpName = "seconds" };
-        var iterations = new Option<long?>("--iterations") { Description = "Also stop each solver after this many iterations (reproducible with --seed).", HelpName = "n" };
-        var target = new Option<double?>("--target") { Description = "Stop a solver as soon as it has a feasible plan with an objective at or below this.", HelpName = "objective" };
+        var time = OptionValues.Seconds("--time", $"Wall-clock budget in seconds. Default: the job's timeSeconds, else {DefaultTimeSeconds}.");
+        var iterations = OptionValues.Count("--iterations", "Also stop each solver after this many iterations (reproducible with --seed).", 1);
+        var target = OptionValues.Number("--target", "Stop a solver as soon as it has a feasible plan with an objective at or below this.", "objective");
         var objective = SharedOptions.Objective();
-        var seed = new Option<int?>("--seed") { Description = "Random seed (solver k uses seed + k). Default: the job's seed, else 1.", HelpName = "n" };
-        var threads = new Option<int?>("--threads") { Description = "Independent searches per solver run in parallel. Default 1.", HelpName = "n" };
+        var seed = OptionValues.Seed("--seed", "Random seed (solver k uses seed + k). Default: the job's seed, else 1.");
+        var threads = OptionValues.Whole("--threads", "Independent searches per solver run in parallel. Default 1.", 1);
         var output = SharedOptions.Out("Output folder. Default: runs/<instance>-<yyyyMMdd-HHmmss> under the current folder.");
         var quiet = new Option<bool>("--quiet") { Description = "No progress lines while solving." };
         var command = new Command("solve", "Search for a good plan and write routes.csv, summary.json and trace.csv; exit 0 feasible, 3 infeasible, 130 interrupted.");
@@ -47,31 +47,9 @@ public static class SolveCommand
                 OutDir = parse.GetValue(output),
                 Quiet = parse.GetValue(quiet),
             };
-            var error = Validate(request);
-            if (error is not null)
-            {
-                context.Err.WriteLine("anneal: " + error);
-                return ExitCodes.InvalidInput;
-            }
-
             return Execute(InputLoader.Load(parse.GetValue(input)!), request, context);
         });
         return command;
-    }
-
-    public static string? Validate(SolveRequest r)
-    {
-        if (r.TimeSeconds is { } t && !(t > 0 && double.IsFinite(t)))
-        {
-            return "--time must be a positive number of seconds";
-        }
-
-        if (r.Iterations is <= 0)
-        {
-            return "--iterations must be at least 1";
-        }
-
-        return r.Threads is <= 0 ? "--threads must be at least 1" : null;
     }
 
     public static int Execute(LoadedInput input, SolveRequest request, CliContext context)

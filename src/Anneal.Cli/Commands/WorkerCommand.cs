@@ -15,9 +15,10 @@ public static class WorkerCommand
     {
         var inbox = new Option<string?>("--inbox") { Description = "Folder where jobs are dropped (a job folder, a .zip of one, or a benchmark file).", HelpName = "dir" };
         var outbox = new Option<string?>("--outbox") { Description = "Folder where each solved job's folder appears, complete.", HelpName = "dir" };
-        var time = new Option<double?>("--time") { Description = "Search budget per job, for jobs whose settings give none. Default 60.", HelpName = "seconds" };
-        var jobs = new Option<int?>("--jobs") { Description = "Jobs solved at the same time. Default 1.", HelpName = "n" };
-        var threads = new Option<int?>("--threads") { Description = "Independent searches per solver within a job. Default 1.", HelpName = "n" };
+        // Taken as text and checked with the other settings, so that every wrong one is named at once.
+        var time = new Option<string?>("--time") { Description = "Search budget per job, for jobs whose settings give none. Default 60.", HelpName = "seconds" };
+        var jobs = new Option<string?>("--jobs") { Description = "Jobs solved at the same time. Default 1.", HelpName = "n" };
+        var threads = new Option<string?>("--threads") { Description = "Independent searches per solver within a job. Default 1.", HelpName = "n" };
         var solvers = new Option<string?>("--solvers") { Description = "Comma-separated solver names for every job. Default: each job's list, else all that apply.", HelpName = "list" };
         var once = new Option<bool>("--once") { Description = "Solve what the inbox holds, then exit (for cron and scripts)." };
         var command = new Command("worker",
@@ -32,9 +33,9 @@ public static class WorkerCommand
             var settings = new Dictionary<string, string?>(StringComparer.OrdinalIgnoreCase);
             Put(settings, nameof(WorkerOptions.Inbox), parse.GetValue(inbox));
             Put(settings, nameof(WorkerOptions.Outbox), parse.GetValue(outbox));
-            Put(settings, nameof(WorkerOptions.TimeSeconds), parse.GetValue(time)?.ToString("R", CultureInfo.InvariantCulture));
-            Put(settings, nameof(WorkerOptions.ConcurrentJobs), parse.GetValue(jobs)?.ToString(CultureInfo.InvariantCulture));
-            Put(settings, nameof(WorkerOptions.ThreadsPerJob), parse.GetValue(threads)?.ToString(CultureInfo.InvariantCulture));
+            Put(settings, nameof(WorkerOptions.TimeSeconds), parse.GetValue(time));
+            Put(settings, nameof(WorkerOptions.ConcurrentJobs), parse.GetValue(jobs));
+            Put(settings, nameof(WorkerOptions.ThreadsPerJob), parse.GetValue(threads));
             Put(settings, nameof(WorkerOptions.Solvers), parse.GetValue(solvers));
             return Execute(settings, parse.GetValue(once), context);
         });
@@ -59,12 +60,6 @@ public static class WorkerCommand
                 context.Err.WriteLine("anneal: " + failure);
             }
 
-            return ExitCodes.InvalidInput;
-        }
-        catch (InvalidOperationException e) when (e.Message.StartsWith("Failed to convert configuration value", StringComparison.Ordinal))
-        {
-            // The binder's own wording for a value of the wrong type (a word where a number or a choice belongs).
-            context.Err.WriteLine("anneal: invalid worker setting: " + e.Message);
             return ExitCodes.InvalidInput;
         }
 

@@ -29,7 +29,7 @@ public static class OutputFolder
         }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException or ArgumentException or NotSupportedException)
         {
-            throw OutputException.For(path, e);
+            throw OutputException.ForFolder(path, e);
         }
     }
 

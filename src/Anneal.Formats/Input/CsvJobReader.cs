@@ -76,7 +76,7 @@ public static class CsvJobReader
         }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException)
         {
-            problems.Add(file, null, null, null, "the file cannot be read: " + e.Message, "check that the file is not locked and may be read");
+            problems.Add(file, null, null, null, "the file cannot be read: " + FileTrouble.Reading(path, e), "check that the file is not locked and may be read");
             return null;
         }
     }

@@ -16,7 +16,7 @@ public static class InputLoader
         if (!File.Exists(path))
         {
             throw new InputException(new InputProblem(path, null, null, null,
-                "no such file or folder", "give the path of a CSV job folder, an .xlsx workbook, a Solomon .txt file or a CVRPLIB .vrp file"));
+                "there is no file or folder at this path", Nearby(path) + "give the path of a CSV job folder, an .xlsx workbook, a Solomon .txt file or a CVRPLIB .vrp file"));
         }
 
         if (WorkbookReader.LooksLike(path))
@@ -37,7 +37,7 @@ public static class InputLoader
         }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException)
         {
-            throw new InputException(new InputProblem(path, null, null, null, "the file cannot be read: " + e.Message, "check the path and its permissions"));
+            throw new InputException(new InputProblem(path, null, null, null, "the file cannot be read: " + FileTrouble.Reading(path, e), "check the path and its permissions"));
         }
 
         if (CvrplibReader.LooksLike(text))
@@ -50,8 +50,35 @@ public static class InputLoader
             return new LoadedInput(SolomonReader.Parse(text, path), new JobSettings { Objective = Core.Model.Objective.Distance }, "solomon", path);
         }
 
+        if (Path.GetFileName(path).ToLowerInvariant() is "stops.csv" or "depots.csv" or "vehicles.csv" or "matrix.csv" or "settings.json")
+        {
+            throw new InputException(new InputProblem(path, null, null, null, "this is one file of a CSV job; a job is read as a whole folder",
+                "give the folder that holds it: " + (Path.GetDirectoryName(path) is { Length: > 0 } d ? d : ".")));
+        }
+
         throw new InputException(new InputProblem(path, 1, null, null,
             "the format is not recognised (neither a Solomon VRPTW file nor a CVRPLIB/TSPLIB .vrp file)",
             "give a CSV job folder, a Solomon text file (VEHICLE and CUSTOMER sections) or a CVRPLIB file (NODE_COORD_SECTION)"));
+    }
+
+    /// <summary>"did you mean 'marl-valley'? " when the folder above holds a name close to the one typed.</summary>
+    private static string Nearby(string path)
+    {
+        try
+        {
+            var full = Path.GetFullPath(path);
+            var parent = Path.GetDirectoryName(Path.TrimEndingDirectorySeparator(full));
+            if (parent is null || !Directory.Exists(parent))
+            {
+                return string.Empty;
+            }
+
+            var near = Closest.Find(Path.GetFileName(Path.TrimEndingDirectorySeparator(full)), Directory.EnumerateFileSystemEntries(parent).Select(Path.GetFileName).OfType<string>());
+            return near is null ? string.Empty : $"did you mean '{Path.Combine(Path.GetDirectoryName(Path.TrimEndingDirectorySeparator(path)) ?? string.Empty, near)}'? Or ";
+        }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException or ArgumentException)
+        {
+            return string.Empty;
+        }
     }
 }

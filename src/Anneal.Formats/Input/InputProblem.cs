@@ -24,6 +24,14 @@ public sealed record InputProblem(string File, int? Row, string? Column, string?
     /// <summary>The workbook cell (e.g. "D4") the problem is in, when it is about one cell.</summary>
     public string? Cell { get; init; }
 
+    /// <summary>For a JSON file: the key's path (e.g. "rules.timeWindows.hard"); <see cref="Row"/> is then its line.</summary>
+    public string? JsonPath { get; init; }
+
+    /// <summary>For a JSON file: the character column within the line, from 1.</summary>
+    public int? Position { get; init; }
+
+    private bool InJson => JsonPath is not null || Position is not null;
+
     public override string ToString()
     {
         var where = File;
@@ -34,7 +42,17 @@ public sealed record InputProblem(string File, int? Row, string? Column, string?
 
         if (Row is not null)
         {
-            where += $", row {Row}";
+            where += InJson ? $", line {Row}" : $", row {Row}";
+        }
+
+        if (Position is not null)
+        {
+            where += $", column {Position}";
+        }
+
+        if (JsonPath is not null)
+        {
+            where += $", at {JsonPath}";
         }
 
         if (Column is not null)

@@ -24,7 +24,8 @@ public static class RouteFileReader
         }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException or ArgumentException or NotSupportedException)
         {
-            throw new InputException(new InputProblem(path, null, null, null, "the route file cannot be read: " + e.Message, "check the path and its permissions"));
+            throw new InputException(new InputProblem(path, null, null, null, "the routes file cannot be read: " + FileTrouble.Reading(path, e),
+                "give --routes the path of a route file (one line 'Route #1: 5 3 7' per vehicle)"));
         }
 
         return Parse(text, path, instance);

@@ -20,6 +20,11 @@ public sealed class OutputException : Exception
     {
     }
 
+    /// <summary>A file that cannot be written, in a plain sentence.</summary>
     public static OutputException For(string path, Exception inner) =>
-        new($"cannot write {path}: {inner.Message}", inner) { Path = path };
+        new($"cannot write {path}: {FileTrouble.Writing(path, inner)}", inner) { Path = path };
+
+    /// <summary>A folder that cannot be created, in a plain sentence.</summary>
+    public static OutputException ForFolder(string path, Exception inner) =>
+        new($"the folder {path} cannot be created: {FileTrouble.Writing(path, inner)}", inner) { Path = path };
 }

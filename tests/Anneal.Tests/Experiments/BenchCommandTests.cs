@@ -75,8 +75,8 @@ public sealed class BenchCommandTests : CommandTest
     [Fact]
     public void Several_budgets_parse_and_bad_ones_are_refused()
     {
-        Assert.Equal([5.0, 30.0], Anneal.Cli.Commands.BenchCommand.ParseBudgets("5,30")!);
-        Assert.Null(Anneal.Cli.Commands.BenchCommand.ParseBudgets("5,x"));
+        Assert.Equal([5.0, 30.0], Anneal.Cli.Commands.OptionValues.BenchBudgets("5,30")!);
+        Assert.Null(Anneal.Cli.Commands.OptionValues.BenchBudgets("5,x"));
         int code = CliApp.Run(["bench", Dir, "--time", "0"], new CliContext(Out, Err));
         Assert.Equal(ExitCodes.InvalidInput, code);
     }

@@ -1,5 +1,6 @@
 using System.Text.Json;
 using Anneal.Core.Model;
+using Anneal.Formats.Input.Json;
 
 namespace Anneal.Formats.Input.Csv;
 
@@ -24,31 +25,25 @@ internal sealed record SettingsFile
 
     public static SettingsFile Read(byte[] bytes, ProblemList problems)
     {
-        var span = bytes.AsSpan();
-        if (span.StartsWith((ReadOnlySpan<byte>)[0xEF, 0xBB, 0xBF]))
-        {
-            span = span[3..];
-        }
-
         JsonTree root;
         try
         {
-            root = JsonTree.Parse(span);
+            root = JsonTree.Parse(bytes);
         }
-        catch (Exception e) when (e is JsonException or InvalidOperationException or FormatException)
+        catch (JsonSyntaxException e)
         {
-            int? line = e is JsonException j && j.LineNumber is long l ? (int)l + 1 : null;
-            problems.Add(FileName, line, null, null, "not valid JSON: " + Clean(e.Message), "fix the JSON syntax near this line (comments and trailing commas are allowed)");
+            problems.Add(e.Problem(FileName, "mend the JSON at that place (comments and trailing commas are allowed)"));
             return new SettingsFile();
         }
 
         if (!root.IsObject)
         {
-            problems.Add(FileName, root.Line, null, root.Shown, "the settings must be one JSON object", "wrap the settings in { ... }");
+            problems.Add(new InputProblem(FileName, root.Line, null, root.Shown, "the settings must be one JSON object", "wrap the settings in { ... }") { Position = root.Column });
             return new SettingsFile();
         }
 
-        return FromTree(root, (line, key, value, problem, fix) => problems.Add(FileName, line, key, value, problem, fix));
+        return FromTree(root, (line, key, value, problem, fix) => problems.Add(
+            new InputProblem(FileName, line, null, value, problem, fix) { JsonPath = key, Position = root.Locate(key, line)?.Column }));
     }
 
     /// <summary>Where a settings problem goes: the line (or row), the key's path, the value as written, what is wrong, the fix.</summary>
@@ -56,12 +51,6 @@ internal sealed record SettingsFile
 
     /// <summary>The settings held by <paramref name="root"/>, an object built from settings.json or from a workbook's settings sheet.</summary>
     public static SettingsFile FromTree(JsonTree root, ProblemSink sink) => new SettingsReader(sink).Top(root);
-
-    private static string Clean(string message)
-    {
-        int cut = message.IndexOf(" Path:", StringComparison.Ordinal);
-        return cut > 0 ? message[..cut] : message;
-    }
 
     private sealed class SettingsReader(ProblemSink sink)
     {
@@ -275,7 +264,7 @@ internal sealed record SettingsFile
         {
             var result = new List<(string, int, JsonTree)>();
             var seen = new HashSet<string>(StringComparer.Ordinal);
-            foreach (var (rawKey, line, value) in obj.Members)
+            foreach (var (rawKey, line, _, value) in obj.Members)
             {
                 string? key = null;
                 foreach (var k in known)

@@ -1,6 +1,7 @@
 using System.Globalization;
 using System.Text.Json;
 using Anneal.Formats.Input.Csv;
+using Anneal.Formats.Input.Json;
 
 namespace Anneal.Formats.Input.Workbook;
 
@@ -40,7 +41,7 @@ internal static class SettingsSheet
                 parent = Child(parent, path[i], row.Line);
             }
 
-            parent.Members.Add((path[^1], row.Line, Value(path[^1], cells.Text("value"), row.Line)));
+            parent.Members.Add((path[^1], row.Line, 1, Value(path[^1], cells.Text("value"), row.Line)));
         }
 
         // A problem about a key points at the key cell; one about a value at the value cell.
@@ -58,7 +59,7 @@ internal static class SettingsSheet
     /// <summary>The object under <paramref name="key"/>, made on first use so that rows of one rule gather under it.</summary>
     private static JsonTree Child(JsonTree parent, string key, int line)
     {
-        foreach (var (k, _, v) in parent.Members)
+        foreach (var (k, _, _, v) in parent.Members)
         {
             if (string.Equals(k, key, StringComparison.OrdinalIgnoreCase) && v.IsObject)
             {
@@ -67,7 +68,7 @@ internal static class SettingsSheet
         }
 
         var child = new JsonTree(JsonTokenType.StartObject, line);
-        parent.Members.Add((key, line, child));
+        parent.Members.Add((key, line, 1, child));
         return child;
     }
 

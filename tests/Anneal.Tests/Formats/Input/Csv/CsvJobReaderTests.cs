@@ -104,10 +104,10 @@ public class CsvJobReaderTests
         Assert.Contains(p, x => x is { File: "vehicles.csv", Row: 2, Column: "capacity_kg", Value: "-1" });
         Assert.Contains(p, x => x is { File: "vehicles.csv", Row: 2, Column: "shift_end" });
         Assert.Contains(p, x => x is { File: "vehicles.csv", Row: 2, Column: "count", Value: "0" });
-        Assert.Contains(p, x => x is { File: "settings.json", Row: 2, Column: "objective" });
-        Assert.Contains(p, x => x is { File: "settings.json", Row: 3, Column: "travel.speedKmh" });
-        Assert.Contains(p, x => x is { File: "settings.json", Row: 4, Column: "colour" });
-        Assert.Contains(p, x => x is { File: "settings.json", Column: "rules.capacity.pricePerUnit" });
+        Assert.Contains(p, x => x is { File: "settings.json", Row: 2, Position: 2, JsonPath: "objective" });
+        Assert.Contains(p, x => x is { File: "settings.json", Row: 3, Position: 14, JsonPath: "travel.speedKmh" });
+        Assert.Contains(p, x => x is { File: "settings.json", Row: 4, JsonPath: "colour" });
+        Assert.Contains(p, x => x is { File: "settings.json", JsonPath: "rules.capacity.pricePerUnit" });
     }
 
     [Fact]

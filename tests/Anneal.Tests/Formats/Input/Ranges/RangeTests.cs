@@ -80,7 +80,7 @@ public class RangeTests
         var e = Assert.Throws<InputException>(() => CsvJobReader.Read(job.Path));
 
         var p = Assert.Single(e.Problems);
-        Assert.Equal(("settings.json", key), (p.File, p.Column));
+        Assert.Equal(("settings.json", key), (p.File, p.JsonPath));
         Assert.Contains("outside the accepted range", p.Problem, StringComparison.Ordinal);
     }
 

@@ -1,7 +1,7 @@
-namespace Anneal.Formats.Input.Csv;
+namespace Anneal.Formats.Input;
 
 /// <summary>Finds the known name a typo most likely meant (Levenshtein 1966 edit distance).</summary>
-internal static class Closest
+public static class Closest
 {
     /// <summary>The nearest candidate, or null when none is near enough to be a plausible typo.</summary>
     public static string? Find(string typed, IEnumerable<string> candidates)
