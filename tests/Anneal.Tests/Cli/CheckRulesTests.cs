@@ -89,7 +89,7 @@ public sealed class CheckRulesTests : CommandTest
 
         var e = Assert.Throws<InputException>(() => CsvJobReader.Read(job.Path));
 
-        Assert.Equal("rules.unserved.pricePerStop", Assert.Single(e.Problems).Column);
+        Assert.Equal("rules.unserved.pricePerStop", Assert.Single(e.Problems).JsonPath);
     }
 
     /// <summary>`anneal check` on the job; it must be valid (warnings do not change the exit code).</summary>
