@@ -149,7 +149,7 @@ public static class BenchRunner
             TraceCsvWriter.Rows(run.Solver, result.Trace));
         return new BenchRow(instance.Name, run.Solver, run.Seed, run.BudgetSeconds, run.Objective, evaluation.Objective,
             evaluation.VehiclesUsed, evaluation.Distance, evaluation.Feasible, result.SecondsToBest, result.Seconds,
-            reference?.Value, reference?.Vehicles, gap, Path.Combine(TraceFolder, traceName));
+            reference?.Value, reference?.Vehicles, result.BoundOnly ? null : gap, Path.Combine(TraceFolder, traceName), result.LowerBound, result.BoundOnly);
     }
 
     private static string Safe(string name)

@@ -12,8 +12,11 @@ public static class ResultsCsv
     public static readonly string[] Columns =
     [
         "instance", "solver", "seed", "budget_s", "objective", "objective_value", "vehicles", "distance", "feasible",
-        "seconds_to_best", "seconds", "reference", "reference_vehicles", "gap_pct", "trace_file",
+        "seconds_to_best", "seconds", "reference", "reference_vehicles", "gap_pct", "trace_file", "lower_bound", "bound_only",
     ];
+
+    /// <summary>Columns added later: a results.csv written before them is still read (the values are then absent).</summary>
+    private static readonly string[] Later = ["lower_bound", "bound_only"];
 
     public static void Write(string path, IEnumerable<BenchRow> rows) => AtomicFile.WriteText(path, writer =>
     {
@@ -22,7 +25,8 @@ public static class ResultsCsv
         {
             writer.WriteLine(string.Join(',',
                 Quote(r.Instance), Quote(r.Solver), I(r.Seed), N(r.BudgetSeconds), r.Objective, N(r.ObjectiveValue), I(r.Vehicles), N(r.Distance),
-                r.Feasible ? "true" : "false", N(r.SecondsToBest), N(r.Seconds), N(r.Reference), I(r.ReferenceVehicles), N(r.GapPercent), Quote(r.TraceFile)));
+                r.Feasible ? "true" : "false", N(r.SecondsToBest), N(r.Seconds), N(r.Reference), I(r.ReferenceVehicles), N(r.GapPercent), Quote(r.TraceFile),
+                N(r.LowerBound), r.BoundOnly ? "true" : "false"));
         }
     });
 
@@ -48,7 +52,7 @@ public static class ResultsCsv
 
             foreach (var column in Columns)
             {
-                if (!csv.HeaderRecord!.Contains(column, StringComparer.Ordinal))
+                if (!csv.HeaderRecord!.Contains(column, StringComparer.Ordinal) && !Later.Contains(column, StringComparer.Ordinal))
                 {
                     problems.Add(new(path, 1, column, null, "a column of results.csv is missing", "let anneal bench write results.csv, or start a new --out folder"));
                 }
@@ -65,7 +69,7 @@ public static class ResultsCsv
                 var row = new BenchRow(cells.Text("instance"), cells.Text("solver"), (int)cells.Number("seed"), cells.Number("budget_s"), cells.Text("objective"),
                     cells.Number("objective_value"), (int)cells.Number("vehicles"), cells.Number("distance"), cells.Text("feasible") == "true",
                     cells.Number("seconds_to_best"), cells.Number("seconds"), cells.Optional("reference"), (int?)cells.Optional("reference_vehicles"),
-                    cells.Optional("gap_pct"), cells.Text("trace_file"));
+                    cells.Optional("gap_pct"), cells.Text("trace_file"), cells.Optional("lower_bound"), cells.Text("bound_only") == "true");
                 if (cells.Ok)
                 {
                     rows.Add(row);
@@ -98,7 +102,7 @@ public static class ResultsCsv
     {
         public bool Ok { get; private set; } = true;
 
-        public string Text(string column) => csv.GetField(column) ?? string.Empty;
+        public string Text(string column) => csv.TryGetField(column, out string? text) ? text ?? string.Empty : string.Empty;
 
         public double Number(string column) => Optional(column) ?? Fail(column, string.Empty);
 

@@ -136,6 +136,11 @@ public static class BenchCommand
         var stats = ExperimentReport.Write(folder, outcome, machine, referencePath);
         w.WriteLine();
         WriteTable(w, SummaryTables.Configs(stats));
+        if (SummaryTables.Bounds(outcome.PlanRows()) is { } bounds)
+        {
+            w.WriteLine();
+            WriteTable(w, bounds);
+        }
         if (stats.Pairs.Count > 0)
         {
             w.WriteLine();
@@ -180,6 +185,9 @@ public static class BenchCommand
 
     private const string Header = "instance        solver     budget  seed  vehicles      distance  feasible  t_best(s)    gap";
 
-    private static string Format(BenchRow r) => string.Create(CultureInfo.InvariantCulture,
+    private static string Format(BenchRow r) => r.BoundOnly
+        ? string.Create(CultureInfo.InvariantCulture,
+            $"{r.Instance,-15} {r.Solver,-10} {r.BudgetSeconds,6:0.###} {r.Seed,5} lower bound {(r.LowerBound is { } b ? b.ToString("0.00", CultureInfo.InvariantCulture) : "none")} at {r.SecondsToBest:0.0} s{(r.LowerBound is { } lb && r.Reference is { } rf && rf > 0 ? $" ({SummaryTables.Pct(lb / rf * 100)} of the reference)" : string.Empty)}")
+        : string.Create(CultureInfo.InvariantCulture,
         $"{r.Instance,-15} {r.Solver,-10} {r.BudgetSeconds,6:0.###} {r.Seed,5} {r.Vehicles,9} {r.Distance,13:0.00}  {(r.Feasible ? "yes" : "NO"),-8} {r.SecondsToBest,9:0.0} {(r.GapPercent is { } g ? SummaryTables.Pct(g) : "-"),7}");
 }

@@ -17,20 +17,22 @@ public static class ExperimentReport
 
     public static ExperimentStatistics Write(string outDir, BenchOutcome outcome, MachineInfo machine, string? referenceFile)
     {
-        var rows = outcome.PlanRows();
+        // A solver that only proves bounds has no plan to rank: its rows feed the bound table, not the statistics.
+        var all = outcome.PlanRows();
+        var rows = all.Where(r => !r.BoundOnly).ToList();
         var stats = ExperimentAnalysis.Compute(rows);
         var traced = ExperimentTraces.Load(outDir, rows, out int unreadable);
         var pictures = ExperimentPictures.Draw(outDir, rows, traced, TimeToTarget.DefaultPercents);
         AtomicFile.WriteText(Path.Combine(outDir, StatisticsFile), w => SummaryTables.ConfigCsv(stats).ToList().ForEach(w.WriteLine));
         AtomicFile.WriteText(Path.Combine(outDir, ComparisonsFile), w => SummaryTables.PairCsv(stats).ToList().ForEach(w.WriteLine));
-        var doc = Document(outcome, rows, stats, machine, referenceFile, pictures, unreadable);
+        var doc = Document(outcome, rows, stats, machine, referenceFile, pictures, unreadable, SummaryTables.Bounds(all));
         AtomicFile.WriteText(Path.Combine(outDir, MarkdownSummary.FileName), w => w.Write(MarkdownSummary.Render(doc)));
         AtomicFile.WriteText(Path.Combine(outDir, HtmlSummary.FileName), w => w.Write(HtmlSummary.Render(doc)));
         return stats;
     }
 
     private static SummaryDocument Document(BenchOutcome outcome, IReadOnlyList<BenchRow> rows, ExperimentStatistics stats, MachineInfo machine,
-        string? referenceFile, ExperimentPictures pictures, int unreadable)
+        string? referenceFile, ExperimentPictures pictures, int unreadable, SummaryTable? bounds)
     {
         var solvers = outcome.Plan.Select(p => p.Solver).Distinct(StringComparer.OrdinalIgnoreCase);
         var budgets = outcome.Plan.Select(p => p.BudgetSeconds).Distinct().Order().Select(SummaryTables.Seconds);
@@ -69,6 +71,16 @@ public static class ExperimentReport
             ], SummaryTables.Pairs(stats)));
         }
 
+        if (bounds is not null)
+        {
+            sections.Add(new("Lower bounds",
+            [
+                "The strongest lower bound any run proved on the objective of plans that keep the hard rules, per instance. "
+                + "Bound ÷ reference: how close the bound comes to the best-known value (a valid bound never exceeds an optimum proven under the same distance rule). "
+                + "Plan within: the best feasible plan of the experiment is proved at most this far above the optimum.",
+            ], bounds));
+        }
+
         var pics = new List<SummaryPicture>();
         if (pictures.Profile is { } profile)
         {
@@ -88,7 +100,7 @@ public static class ExperimentReport
         sections.Add(new("Pictures", [], null, pics));
         sections.Add(new("Files",
         [
-            "results.csv: one row per finished run (instance, solver, seed, budget_s, objective, objective_value, vehicles, distance, feasible, seconds_to_best, seconds, reference, reference_vehicles, gap_pct, trace_file); "
+            "results.csv: one row per finished run (instance, solver, seed, budget_s, objective, objective_value, vehicles, distance, feasible, seconds_to_best, seconds, reference, reference_vehicles, gap_pct, trace_file, lower_bound, bound_only); "
             + "gap_pct there is to the reference file only. traces/: each run's convergence trace. statistics.csv and comparisons.csv: the tables above as plain numbers. machine.json: where and when each invocation ran.",
         ]));
         return new SummaryDocument("Solver comparison", lead, sections);

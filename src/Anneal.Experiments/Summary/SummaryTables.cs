@@ -27,6 +27,36 @@ public static class SummaryTables
         ]).ToList(),
         [true, false, false, true, true, true, true, true, false, false]);
 
+    /// <summary>
+    /// Per instance and objective, the strongest proven lower bound of any run and how it compares: with the reference
+    /// (bound ÷ reference; not under vehicles-then-distance, whose references are distances) and with the best plan that
+    /// keeps the hard rules (the gap the bound proves: (plan − bound) ÷ plan). Null when no run proved a bound.
+    /// </summary>
+    public static SummaryTable? Bounds(IReadOnlyList<BenchRow> rows)
+    {
+        var groups = rows.GroupBy(r => (r.Instance, r.Objective)).Where(g => g.Any(r => r.LowerBound is not null)).OrderBy(g => g.Key.Instance, StringComparer.Ordinal).ToList();
+        if (groups.Count == 0)
+        {
+            return null;
+        }
+
+        var table = new List<IReadOnlyList<string>>();
+        foreach (var g in groups)
+        {
+            var bound = g.Where(r => r.LowerBound is not null).MaxBy(r => r.LowerBound!.Value)!;
+            double b = bound.LowerBound!.Value;
+            double? reference = g.Select(r => r.Reference).FirstOrDefault(v => v is not null);
+            double? plan = g.Where(r => !r.BoundOnly && r.Feasible).Select(r => (double?)r.ObjectiveValue).Min();
+            string ratio = reference is { } v && v > 0 && g.Key.Objective != "vehicles-then-distance" ? Pct(b / v * 100) : "n/a";
+            string proved = plan is { } p && Math.Abs(p) > 1e-12 ? Pct(Math.Max(0, (p - b) / Math.Abs(p) * 100)) : "n/a";
+            table.Add([g.Key.Instance, g.Key.Objective, N(b), bound.Solver, Seconds(bound.SecondsToBest), reference is { } rv ? N(rv) : "n/a", ratio,
+                plan is { } pv ? N(pv) : "n/a", proved]);
+        }
+
+        return new SummaryTable(["instance", "objective", "lower bound", "by", "reached at", "reference", "bound ÷ reference", "best plan", "plan within (of optimal)"],
+            table, [false, false, true, false, true, true, true, true, true]);
+    }
+
     /// <summary>statistics.csv: one row per solver and budget, plain numbers for other tools.</summary>
     public static IReadOnlyList<string> ConfigCsv(ExperimentStatistics stats)
     {

@@ -88,6 +88,20 @@ public sealed class ResumeTests : TempFolderTest
         Assert.Equal((2, "seed", "one"), (problem.Row!.Value, problem.Column!, problem.Value!));
     }
 
+    [Fact]
+    public void Lower_bounds_survive_a_rewrite_and_older_files_without_them_still_resume()
+    {
+        string path = Path.Combine(Dir, "results.csv");
+        var bound = new BenchRow("I1", "bound", 1, 5, "distance", 0, 0, 0, false, 1.5, 5, 784, 5, null, "t.csv", 770.25, BoundOnly: true);
+        var plan = new BenchRow("I1", "sa", 1, 5, "distance", 784, 5, 784, true, 2, 5, 784, 5, 0, "u.csv");
+        ResultsCsv.Write(path, [bound, plan]);
+        Assert.Equal([bound, plan], ResultsCsv.Read(path));
+
+        // A results.csv from before the two columns: its rows read back without a bound.
+        File.WriteAllText(path, string.Join(',', ResultsCsv.Columns[..^2]) + "\nI1,sa,1,5,distance,784,5,784,true,2,5,784,5,0,u.csv\n");
+        Assert.Equal([plan], ResultsCsv.Read(path));
+    }
+
     private List<LoadedInput> Instances()
     {
         var inputs = new List<LoadedInput>();
