@@ -4,6 +4,12 @@ namespace Anneal.Core.Model;
 public sealed record Stop
 {
     public required string Id { get; init; }
+
+    /// <summary>What the driver reads (a shop's name); empty when the input gives none.</summary>
+    public string Name { get; init; } = string.Empty;
+
+    /// <summary>Where the driver goes, as written in the input; empty when it gives none.</summary>
+    public string Address { get; init; } = string.Empty;
     public required double X { get; init; }
     public required double Y { get; init; }
 

@@ -4,10 +4,18 @@ using Anneal.Core.Model;
 
 namespace Anneal.Formats.Output;
 
-/// <summary>routes.csv: one row per visit, in route order, with the evaluator's schedule and the load left on board.</summary>
+/// <summary>
+/// routes.csv, the drivers' sheet as data: per route the depot departure (kind <c>start</c>), one row per visit in
+/// order (<c>stop</c>) and the return (<c>end</c>), each with the leg driven from the row before, the evaluator's
+/// schedule and the load left on board. (Later kinds, such as a driver's break, only add rows.)
+/// </summary>
 public static class RoutesCsvWriter
 {
     public const string FileName = "routes.csv";
+
+    /// <summary>The columns before the per-dimension loads, in order (the README documents each).</summary>
+    public static IReadOnlyList<string> Columns { get; } =
+        ["vehicle", "sequence", "kind", "stop", "name", "address", "arrival", "start", "departure", "wait", "late", "window", "distance", "drive"];
 
     public static void Write(string path, Instance instance, PlanEvaluation evaluation) =>
         AtomicFile.WriteText(path, writer => Write(writer, instance, evaluation));
@@ -15,7 +23,7 @@ public static class RoutesCsvWriter
     public static void Write(TextWriter writer, Instance instance, PlanEvaluation evaluation)
     {
         using var csv = CsvOutput.Open(writer);
-        foreach (var name in new[] { "vehicle", "sequence", "stop", "arrival", "start", "departure", "wait", "late", "window" })
+        foreach (var name in Columns)
         {
             csv.WriteField(name);
         }
@@ -28,30 +36,69 @@ public static class RoutesCsvWriter
         csv.NextRecord();
         foreach (var route in evaluation.Routes)
         {
-            string vehicle = instance.Vehicles[route.Vehicle].Id;
+            if (route.Stops.Length == 0)
+            {
+                continue;
+            }
+
+            var v = instance.Vehicles[route.Vehicle];
+            var travel = instance.Travel;
+            var start = instance.Depots[v.StartDepot];
+            var end = instance.Depots[v.EndDepot];
+            int from = instance.DepotLocation(v.StartDepot);
+            double[] onBoard = Loaded(instance, route);
+
+            Row(csv, v.Id, 0, "start", start.Id, start.Name, start.Address, string.Empty, string.Empty, instance.Units.Format(route.Metrics.Departure),
+                string.Empty, string.Empty, string.Empty, 0, 0, onBoard);
             for (int k = 0; k < route.Stops.Length; k++)
             {
-                var stop = instance.Stops[route.Stops[k]];
+                int s = route.Stops[k];
+                var stop = instance.Stops[s];
                 var visit = route.Visits[k];
-                csv.WriteField(vehicle);
-                csv.WriteField((k + 1).ToString(CultureInfo.InvariantCulture));
-                csv.WriteField(stop.Id);
-                csv.WriteField(instance.Units.Format(visit.Arrival));
-                csv.WriteField(instance.Units.Format(visit.Start));
-                csv.WriteField(instance.Units.Format(visit.Departure));
-                csv.WriteField(TimeText.Number(visit.Wait));
-                csv.WriteField(TimeText.Number(visit.Late));
-                csv.WriteField(TimeText.Window(instance, WindowUsed(stop, visit.Arrival)));
-                foreach (double load in route.LoadAfter[k])
-                {
-                    csv.WriteField(TimeText.Amount(load));
-                }
-
-                csv.NextRecord();
+                Row(csv, v.Id, k + 1, "stop", stop.Id, stop.Name, stop.Address, instance.Units.Format(visit.Arrival), instance.Units.Format(visit.Start),
+                    instance.Units.Format(visit.Departure), TimeText.Number(visit.Wait), TimeText.Number(visit.Late),
+                    TimeText.Window(instance, WindowUsed(stop, visit.Arrival)), travel.Distance(from, s), travel.Duration(from, s), route.LoadAfter[k]);
+                from = s;
             }
+
+            int home = instance.DepotLocation(v.EndDepot);
+            Row(csv, v.Id, route.Stops.Length + 1, "end", end.Id, end.Name, end.Address, instance.Units.Format(route.Metrics.Return), string.Empty, string.Empty,
+                string.Empty, string.Empty, string.Empty, travel.Distance(from, home), travel.Duration(from, home), new double[instance.DimensionCount]);
         }
 
         csv.Flush();
+    }
+
+    private static void Row(CsvHelper.CsvWriter csv, string vehicle, int sequence, string kind, string id, string name, string address, string arrival, string start,
+        string departure, string wait, string late, string window, double distance, double drive, double[] load)
+    {
+        foreach (var field in new[] { vehicle, sequence.ToString(CultureInfo.InvariantCulture), kind, id, name, address, arrival, start, departure, wait, late, window,
+            TimeText.Number(distance), TimeText.Number(drive) })
+        {
+            csv.WriteField(field);
+        }
+
+        foreach (double x in load)
+        {
+            csv.WriteField(TimeText.Amount(x));
+        }
+
+        csv.NextRecord();
+    }
+
+    /// <summary>The load on board when the vehicle leaves its depot: everything its route delivers.</summary>
+    public static double[] Loaded(Instance instance, RouteEvaluation route)
+    {
+        var load = new double[instance.DimensionCount];
+        foreach (int s in route.Stops)
+        {
+            for (int d = 0; d < load.Length; d++)
+            {
+                load[d] += instance.Demand(s, d);
+            }
+        }
+
+        return load;
     }
 
     /// <summary>The window the scheduler served in: the first still open on arrival, else the last (served late).</summary>

@@ -28,7 +28,11 @@ public sealed record PlanSummary(
     bool Feasible,
     IReadOnlyList<string> Unserved,
     BreakdownSummary Breakdown,
-    IReadOnlyList<ViolationSummary> Violations);
+    IReadOnlyList<ViolationSummary> Violations,
+    IReadOnlyList<StopSummary> UnservedStops);
+
+/// <summary>A stop as the input names it, for people: id, name and address (empty when the input gives none).</summary>
+public sealed record StopSummary(string Id, string Name, string Address);
 
 public sealed record BreakdownSummary(
     double Fixed,

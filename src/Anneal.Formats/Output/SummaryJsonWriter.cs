@@ -28,9 +28,12 @@ public static class SummaryJsonWriter
     {
         var b = evaluation.Breakdown;
         var unserved = new List<string>(evaluation.Unserved.Count);
+        var unservedStops = new List<StopSummary>(evaluation.Unserved.Count);
         foreach (int s in evaluation.Unserved)
         {
-            unserved.Add(instance.Stops[s].Id);
+            var stop = instance.Stops[s];
+            unserved.Add(stop.Id);
+            unservedStops.Add(new StopSummary(stop.Id, stop.Name, stop.Address));
         }
 
         var violations = new List<ViolationSummary>(evaluation.Violations.Count);
@@ -47,6 +50,7 @@ public static class SummaryJsonWriter
             evaluation.Feasible,
             unserved,
             new BreakdownSummary(b.Fixed, b.Distance, b.Time, b.Vehicles, b.Lateness, b.Overload, b.Overtime, b.DurationExcess, b.Unserved, b.Total),
-            violations);
+            violations,
+            unservedStops);
     }
 }

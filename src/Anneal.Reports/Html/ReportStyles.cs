@@ -27,6 +27,7 @@ internal static class ReportStyles
         #solver-table th, #solver-table td { padding: 4px 6px; }
         tr.chosen td { font-weight: bold; }
         tr.late td { background: #fbeeed; }
+        tr.depot td { background: var(--band); color: var(--muted); }
         figure { margin: 10px 0 18px; }
         figure img { width: 100%; height: auto; border: 1px solid var(--line); }
         figcaption { color: var(--muted); font-size: 13px; }

@@ -46,8 +46,13 @@ internal static class RouteSheets
             h.Append(" · <span class=\"bad\">").Append(Num(m.Overtime, "0")).Append(' ').Append(unit).Append(" over the shift end</span>");
         }
 
-        h.Append("</p><table><thead><tr><th class=\"n\">#</th><th>stop</th><th class=\"n\">arrival</th><th>window</th><th class=\"n\">service</th>")
-            .Append("<th class=\"n\">leaves</th><th>load on board after</th><th class=\"n\">").Append(unit).Append(" late</th></tr></thead><tbody>");
+        var start = instance.Depots[v.StartDepot];
+        var end = instance.Depots[v.EndDepot];
+        h.Append("</p><table><thead><tr><th class=\"n\">#</th><th>stop</th><th>name and address</th><th class=\"n\">arrival</th><th>window</th>")
+            .Append("<th class=\"n\">start of service</th><th class=\"n\">leaves</th><th>load on board after</th><th class=\"n\">").Append(unit).Append(" late</th></tr></thead><tbody>");
+        h.Append("<tr class=\"depot\"><td class=\"n\">0</td><td>").Append(E(start.Id)).Append("</td><td>").Append(Place(start.Name, start.Address))
+            .Append("</td><td class=\"n\"></td><td></td><td class=\"n\"></td><td class=\"n\">").Append(instance.Units.Format(m.Departure))
+            .Append("</td><td>").Append(E(Load(instance, StartLoad(instance, route)))).Append("</td><td class=\"n\"></td></tr>");
         for (int k = 0; k < route.Stops.Length; k++)
         {
             var stop = instance.Stops[route.Stops[k]];
@@ -56,6 +61,7 @@ internal static class RouteSheets
             h.Append(late ? "<tr class=\"late\">" : "<tr>")
                 .Append("<td class=\"n\">").Append(k + 1).Append("</td>")
                 .Append("<td>").Append(E(stop.Id)).Append("</td>")
+                .Append("<td>").Append(Place(stop.Name, stop.Address)).Append("</td>")
                 .Append("<td class=\"n\">").Append(instance.Units.Format(visit.Arrival)).Append("</td>")
                 .Append("<td>").Append(E(Windows(instance, stop))).Append("</td>")
                 .Append("<td class=\"n\">").Append(instance.Units.Format(visit.Start)).Append("</td>")
@@ -64,8 +70,15 @@ internal static class RouteSheets
                 .Append("<td class=\"n\">").Append(late ? Num(visit.Late, "0.#") : string.Empty).Append("</td></tr>");
         }
 
+        h.Append("<tr class=\"depot\"><td class=\"n\">").Append(route.Stops.Length + 1).Append("</td><td>").Append(E(end.Id)).Append("</td><td>")
+            .Append(Place(end.Name, end.Address)).Append("</td><td class=\"n\">").Append(instance.Units.Format(m.Return))
+            .Append("</td><td></td><td class=\"n\"></td><td class=\"n\"></td><td>back at the depot</td><td class=\"n\"></td></tr>");
         h.Append("</tbody></table></section>");
     }
+
+    /// <summary>The name in bold over the address, both encoded; empty when the input gives neither.</summary>
+    private static string Place(string name, string address) =>
+        (name.Length > 0 ? "<b>" + E(name) + "</b>" : string.Empty) + (name.Length > 0 && address.Length > 0 ? "<br>" : string.Empty) + E(address);
 
     private static string Windows(Instance instance, Stop stop)
     {
@@ -78,19 +91,7 @@ internal static class RouteSheets
         return string.Join(", ", parts);
     }
 
-    private static double[] StartLoad(Instance instance, RouteEvaluation route)
-    {
-        var load = new double[instance.DimensionCount];
-        foreach (int s in route.Stops)
-        {
-            for (int d = 0; d < load.Length; d++)
-            {
-                load[d] += instance.Demand(s, d);
-            }
-        }
-
-        return load;
-    }
+    private static double[] StartLoad(Instance instance, RouteEvaluation route) => RoutesCsvWriter.Loaded(instance, route);
 
     private static string Load(Instance instance, double[] load)
     {

@@ -21,7 +21,7 @@ public sealed class EvaluateCommandTests : CommandTest
         Assert.Equal(ExitCodes.Success, Evaluate(AllOnOneVan, outDir: outDir));
 
         Assert.Contains("Plan: feasible", Out.ToString(), StringComparison.Ordinal);
-        Assert.Equal(4, File.ReadAllLines(Path.Combine(outDir, "routes.csv")).Length);
+        Assert.Equal(1 + 1 + 3 + 1, File.ReadAllLines(Path.Combine(outDir, "routes.csv")).Length); // header, depot departure, 3 stops, return
         using var summary = JsonDocument.Parse(File.ReadAllText(Path.Combine(outDir, "summary.json")));
         Assert.Equal(JsonValueKind.Null, summary.RootElement.GetProperty("chosen").ValueKind);
         Assert.Equal(0, summary.RootElement.GetProperty("solvers").GetArrayLength());

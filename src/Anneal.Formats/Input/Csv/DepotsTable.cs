@@ -9,7 +9,7 @@ internal static class DepotsTable
 
     public static (List<Depot> Depots, IdRegistry Ids, CoordinateSystem System) Read(CsvTable table, ProblemList problems)
     {
-        HeaderCheck.Check(table, ["id", .. Coordinates.Columns], [], problems);
+        HeaderCheck.Check(table, ["id", "name", "address", .. Coordinates.Columns], [], problems);
         bool hasId = HeaderCheck.Require(table, "id", "a unique name per depot", problems);
         var system = Coordinates.Detect(table, problems);
         var depots = new List<Depot>();
@@ -24,7 +24,7 @@ internal static class DepotsTable
             }
 
             var (x, y) = Coordinates.Read(cells, system);
-            depots.Add(new Depot { Id = id, X = x, Y = y });
+            depots.Add(new Depot { Id = id, Name = cells.Text("name"), Address = cells.Text("address"), X = x, Y = y });
         }
 
         if (table.Rows.Count == 0)

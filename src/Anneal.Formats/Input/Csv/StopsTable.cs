@@ -9,7 +9,7 @@ internal static class StopsTable
 
     private const string DemandPrefix = "demand_";
 
-    private static readonly string[] Known = ["id", .. Coordinates.Columns, "service", "windows", "needs", "optional", "penalty"];
+    private static readonly string[] Known = ["id", "name", "address", .. Coordinates.Columns, "service", "windows", "needs", "optional", "penalty"];
 
     /// <param name="dimensions">The job's dimensions from vehicles.csv; null when vehicles.csv could not be read.</param>
     /// <param name="vehicleEquipment">Equipment some vehicle carries; null when vehicles.csv could not be read.</param>
@@ -60,6 +60,8 @@ internal static class StopsTable
             stops.Add(new Stop
             {
                 Id = id,
+                Name = cells.Text("name"),
+                Address = cells.Text("address"),
                 X = x,
                 Y = y,
                 Demand = demand,

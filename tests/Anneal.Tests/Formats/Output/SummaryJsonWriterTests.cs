@@ -29,7 +29,7 @@ public sealed class SummaryJsonWriterTests : TempFolderTest
         }
 
         var plan = root.GetProperty("plan");
-        foreach (var field in new[] { "objective", "distance", "duration", "vehicles", "feasible", "unserved", "breakdown", "violations" })
+        foreach (var field in new[] { "objective", "distance", "duration", "vehicles", "feasible", "unserved", "breakdown", "violations", "unservedStops" })
         {
             Assert.True(plan.TryGetProperty(field, out _), "plan." + field);
         }
