@@ -1,7 +1,9 @@
+using Anneal.Worker.Arrival;
+
 namespace Anneal.Worker;
 
 /// <summary>Takes jobs from the inbox by renaming them into this worker's folder, and hands them back.</summary>
-public sealed class JobClaimer(WorkerFolders folders, string workerFolder, TimeSpan settle, TimeProvider clock)
+public sealed class JobClaimer(WorkerFolders folders, string workerFolder, SettleWatch settle, TimeProvider clock)
 {
     /// <summary>True while the inbox holds anything that is or will become a job (settled or still arriving).</summary>
     public bool InboxHasJobs()
@@ -21,7 +23,7 @@ public sealed class JobClaimer(WorkerFolders folders, string workerFolder, TimeS
     public ClaimedJob? TryClaimNext()
     {
         var now = clock.GetUtcNow();
-        foreach (var candidate in Settled(now))
+        foreach (var candidate in Settled())
         {
             bool isFolder = candidate is DirectoryInfo;
             var entry = JobEntry.Parse(candidate.Name, isFolder);
@@ -54,16 +56,18 @@ public sealed class JobClaimer(WorkerFolders folders, string workerFolder, TimeS
         return target;
     }
 
-    private List<FileSystemInfo> Settled(DateTimeOffset now)
+    private List<FileSystemInfo> Settled()
     {
-        var list = new List<FileSystemInfo>();
+        var candidates = new List<FileSystemInfo>();
         foreach (var info in new DirectoryInfo(folders.Inbox).EnumerateFileSystemInfos())
         {
-            if (!Entries.IsHidden(info.Name) && now - info.LastWriteTimeUtc >= settle)
+            if (!Entries.IsHidden(info.Name))
             {
-                list.Add(info);
+                candidates.Add(info);
             }
         }
+
+        var list = settle.Settled(candidates);
 
         // Oldest first, so a job dropped early in the evening is not starved by later ones.
         list.Sort((a, b) => a.LastWriteTimeUtc != b.LastWriteTimeUtc ? a.LastWriteTimeUtc.CompareTo(b.LastWriteTimeUtc) : string.CompareOrdinal(a.Name, b.Name));

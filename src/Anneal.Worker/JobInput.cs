@@ -1,5 +1,6 @@
 using System.IO.Compression;
 using Anneal.Formats.Input;
+using Anneal.Worker.Untrusted;
 
 namespace Anneal.Worker;
 
@@ -12,14 +13,17 @@ public static class JobInput
     public static string ScratchFor(ClaimedJob job) =>
         Path.Combine(Path.GetDirectoryName(job.Path)!, ".unzipped-" + job.Entry.Name);
 
-    /// <exception cref="InputException">when a .zip cannot be opened.</exception>
-    public static string Locate(ClaimedJob job) => Locate(job.Path, job.Entry.IsFolder, job.Entry.Name, ScratchFor(job));
+    /// <exception cref="InputException">when a .zip cannot be opened, or the job holds anything but plain files.</exception>
+    public static string Locate(ClaimedJob job, UnpackLimits? limits = null) => Locate(job.Path, job.Entry.IsFolder, job.Entry.Name, ScratchFor(job), limits);
 
     /// <summary>What to load for an entry at <paramref name="path"/>; a .zip is unpacked into <paramref name="scratch"/> first.</summary>
     /// <param name="name">The entry's name as the user gave it, for messages.</param>
-    /// <exception cref="InputException">when a .zip cannot be opened.</exception>
-    public static string Locate(string path, bool isFolder, string name, string scratch)
+    /// <param name="limits">How much a .zip may unpack to; <see cref="UnpackLimits.Default"/> when null.</param>
+    /// <exception cref="InputException">when a .zip cannot be opened or breaks a limit, or the job holds anything but plain files.</exception>
+    public static string Locate(string path, bool isFolder, string name, string scratch, UnpackLimits? limits = null)
     {
+        // Nothing in the job is read before every entry is known to be a plain file or folder.
+        PlainFiles.Check(path, name);
         if (isFolder)
         {
             return Within(path);
@@ -33,8 +37,7 @@ public static class JobInput
         try
         {
             Entries.TryDelete(scratch);
-            // The extractor refuses entries that would land outside the folder ("zip slip").
-            ZipFile.ExtractToDirectory(path, scratch);
+            SafeUnzip.Extract(path, scratch, name, limits ?? UnpackLimits.Default);
         }
         catch (Exception e) when (e is IOException or InvalidDataException or UnauthorizedAccessException)
         {

@@ -2,6 +2,7 @@ using Anneal.Formats.Input;
 using Anneal.Formats.Output;
 using Anneal.Jobs;
 using Anneal.Core.Solving;
+using Anneal.Worker.Untrusted;
 using Microsoft.Extensions.Logging;
 
 namespace Anneal.Worker;
@@ -40,7 +41,7 @@ public sealed class JobProcessor(
 
     private (JobResult, string) Solve(ClaimedJob job, JobProgress progress, CancellationToken stop)
     {
-        var input = InputLoader.Load(JobInput.Locate(job));
+        var input = InputLoader.Load(JobInput.Locate(job, new UnpackLimits(options.MaxZipBytes, options.MaxZipRatio)));
         JobPlan plan;
         try
         {
@@ -67,12 +68,21 @@ public sealed class JobProcessor(
         bool interrupted = run.Interrupted;
         bool requeue = interrupted && options.OnShutdown == ShutdownChoice.Requeue;
 
-        string partial = Publisher.NewPartial(folders.Outbox, workerId, job.Id);
         var now = clock.GetUtcNow();
         var best = run.Outcome.Best;
-        writer.Write(partial, run, now);
-        new JobRecord(job.Id, job.Entry.Name, workerId, job.Attempt, job.ClaimedAt, now, interrupted, Final: !requeue).Write(partial);
-        string published = Publisher.Publish(partial, folders.Outbox, job.Id, workerId);
+        string? partial = null;
+        string published;
+        try
+        {
+            partial = Publisher.NewPartial(folders.Outbox, workerId, job.Id);
+            writer.Write(partial, run, now);
+            new JobRecord(job.Id, job.Entry.Name, workerId, job.Attempt, job.ClaimedAt, now, interrupted, Final: !requeue).Write(partial);
+            published = Publisher.Publish(partial, folders.Outbox, job.Id, workerId);
+        }
+        catch (Exception e) when (DiskFull.Is(e))
+        {
+            return NoSpace(job, partial, e);
+        }
 
         // Only now is the input let go: a crash before this line leaves it in working/ for recovery, which sees job.json.
         var result = JobResult.Solved;
@@ -92,6 +102,20 @@ public sealed class JobProcessor(
             best.Result.Solver, best.Evaluation.Objective, best.Evaluation.Feasible ? "feasible" : "infeasible", best.Evaluation.VehiclesUsed,
             (now - job.ClaimedAt).TotalSeconds, published);
         return (result, published);
+    }
+
+    /// <summary>The outbox is full: nothing half-written stays, and the job goes back as it was, with no attempt counted.</summary>
+    private (JobResult, string) NoSpace(ClaimedJob job, string? partial, Exception e)
+    {
+        if (partial is not null)
+        {
+            Entries.TryDelete(partial);
+        }
+
+        string back = claimer.Return(job.Path, job.Entry);
+        log.LogError("Job {JobId}: the outbox has no space left ({Reason}); its plan was not published, and it is back in the inbox as {Entry} with no attempt counted",
+            job.Id, e.Message, Path.GetFileName(back));
+        return (JobResult.NoSpace, back);
     }
 
     private void DropInput(ClaimedJob job)

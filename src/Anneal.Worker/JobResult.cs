@@ -17,4 +17,10 @@ public enum JobResult
 
     /// <summary>Back in the inbox with one more retry counted, after an unexpected error.</summary>
     Retry,
+
+    /// <summary>
+    /// Back in the inbox as it was: the outbox's disk was full when its plan was to be published. The machine's fault,
+    /// not the job's, so no attempt is counted; the worker backs off before claiming again.
+    /// </summary>
+    NoSpace,
 }

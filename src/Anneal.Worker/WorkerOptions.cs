@@ -43,8 +43,20 @@ public sealed class WorkerOptions
     /// <summary>How often the inbox is scanned.</summary>
     public double PollSeconds { get; set; } = 1;
 
-    /// <summary>An inbox entry changed more recently than this is taken to be still arriving and is left alone.</summary>
+    /// <summary>
+    /// An inbox entry is claimed only when every file in it has kept its size and modification time this long (and
+    /// none is open for writing, where the platform tells).
+    /// </summary>
     public double SettleSeconds { get; set; } = 2;
+
+    /// <summary>Claim a job folder only once it holds the ready marker (<c>.ready</c>); files are still claimed once settled.</summary>
+    public bool RequireReadyMarker { get; set; }
+
+    /// <summary>Largest total size a zipped job may unpack to; a larger one is refused before anything is extracted.</summary>
+    public long MaxZipBytes { get; set; } = 256L * 1024 * 1024;
+
+    /// <summary>Largest ratio of unpacked to packed size a zipped job may have (a "zip bomb" is far above it).</summary>
+    public double MaxZipRatio { get; set; } = 100;
 
     /// <summary>How often the status file is rewritten.</summary>
     public double StatusSeconds { get; set; } = 2;

@@ -32,6 +32,16 @@ public sealed class WorkerOptionsValidator(SolverCatalog catalog, WorkerSettings
             problems.Add($"Worker:SettleSeconds must be 0 or more seconds, not {options.SettleSeconds}");
         }
 
+        if (options.MaxZipBytes < 1)
+        {
+            problems.Add($"Worker:MaxZipBytes must be at least 1 byte, not {options.MaxZipBytes}");
+        }
+
+        if (!(options.MaxZipRatio >= 1 && double.IsFinite(options.MaxZipRatio)))
+        {
+            problems.Add($"Worker:MaxZipRatio must be a number of at least 1, not {options.MaxZipRatio}");
+        }
+
         foreach (var solver in SolverCatalog.Split(options.Solvers ?? string.Empty))
         {
             if (!catalog.Exists(solver))

@@ -9,6 +9,9 @@ public sealed class WorkerRun
     /// <summary>The worker stopped by itself (--once found the inbox empty), not on a stop request.</summary>
     public bool FinishedByItself { get; set; }
 
+    /// <summary>Jobs whose plans could not be published because the outbox's disk was full (they are back in the inbox).</summary>
+    public int Unpublished { get; set; }
+
     /// <summary>Set when the worker could not run at all (its folders cannot be created or written).</summary>
     public Exception? Failure { get; set; }
 }

@@ -1,4 +1,5 @@
 using Anneal.Formats.Output;
+using Anneal.Worker.Arrival;
 using Anneal.Jobs;
 using Microsoft.Extensions.Hosting;
 using Microsoft.Extensions.Logging;
@@ -48,7 +49,8 @@ public sealed class WorkerService(
 
     private async Task Loop(WorkerOptions o, WorkerFolders folders, WorkerIdentity me, CancellationToken stop)
     {
-        var claimer = new JobClaimer(folders, me.Folder, TimeSpan.FromSeconds(o.SettleSeconds), clock);
+        var settle = new SettleWatch(folders.Inbox, TimeSpan.FromSeconds(o.SettleSeconds), o.RequireReadyMarker, clock);
+        var claimer = new JobClaimer(folders, me.Folder, settle, clock);
         var recovery = new DeadWorkerRecovery(folders, me.Id, claimer, o.MaxRetries, _log, clock);
         var processor = new JobProcessor(o, folders, me.Id, claimer, runner, writer, _log, clock);
         var status = new StatusFile(StatusFile.PathFor(folders.Working, me.Id), me.Id, clock.GetUtcNow());
@@ -56,6 +58,7 @@ public sealed class WorkerService(
             me.Id, folders.Inbox, folders.Outbox, folders.Failed, o.ConcurrentJobs, o.TimeSeconds, run.Once ? "; stops when the inbox is empty" : string.Empty);
 
         var running = new List<Task>();
+        var backoff = new OutboxBackoff();
         var nextRecovery = DateTimeOffset.MinValue;
         var nextStatus = DateTimeOffset.MinValue;
         while (!stop.IsCancellationRequested)
@@ -70,9 +73,12 @@ public sealed class WorkerService(
                 }
 
                 running.RemoveAll(t => t.IsCompleted);
-                while (running.Count < o.ConcurrentJobs && !stop.IsCancellationRequested && claimer.TryClaimNext() is { } job)
+
+                // After a full outbox, --once claims nothing more (its jobs wait in the inbox for the next run).
+                bool claiming = !backoff.Paused(now) && !(run.Once && backoff.Unpublished > 0);
+                while (claiming && running.Count < o.ConcurrentJobs && !stop.IsCancellationRequested && claimer.TryClaimNext() is { } job)
                 {
-                    running.Add(Start(job, processor, status, stop));
+                    running.Add(Start(job, processor, status, backoff, stop));
                 }
 
                 if (now >= nextStatus)
@@ -81,9 +87,10 @@ public sealed class WorkerService(
                     nextStatus = now + TimeSpan.FromSeconds(o.StatusSeconds);
                 }
 
-                if (run.Once && running.Count == 0 && !claimer.InboxHasJobs())
+                if (run.Once && running.Count == 0 && (!claimer.InboxHasJobs() || backoff.Unpublished > 0))
                 {
                     run.FinishedByItself = true;
+                    run.Unpublished = backoff.Unpublished;
                     break;
                 }
             }
@@ -113,7 +120,7 @@ public sealed class WorkerService(
         }
     }
 
-    private Task Start(ClaimedJob job, JobProcessor processor, StatusFile status, CancellationToken stop)
+    private Task Start(ClaimedJob job, JobProcessor processor, StatusFile status, OutboxBackoff backoff, CancellationToken stop)
     {
         var progress = new JobProgress(job, _log, clock);
         status.Started(progress);
@@ -132,6 +139,16 @@ public sealed class WorkerService(
                 // The job stays in this worker's folder; the next start-up recovers it with a retry counted.
                 _log.LogError("Job {JobId} could not be handed on: {Reason}; it stays in {Path}", job.Id, e.Message, job.Path);
                 done = (JobResult.Retry, job.Path);
+            }
+
+            if (done.Result == JobResult.NoSpace)
+            {
+                var wait = backoff.Full(clock.GetUtcNow());
+                _log.LogError("Worker: the outbox is full; no job is claimed for {Seconds:0} s", wait.TotalSeconds);
+            }
+            else if (done.Result is JobResult.Solved or JobResult.Interrupted or JobResult.Requeued)
+            {
+                backoff.Published();
             }
 
             status.Finished(job, done.Result, done.Where, clock.GetUtcNow());

@@ -69,6 +69,12 @@ public static class WorkerCommand
             return run.Failure is OutputException ? ExitCodes.OutputFailed : ExitCodes.InternalError;
         }
 
+        if (run.Unpublished > 0)
+        {
+            context.Err.WriteLine($"anneal: {run.Unpublished} job(s) could not be published: the outbox has no space left; they are back in the inbox");
+            return ExitCodes.OutputFailed;
+        }
+
         return run.FinishedByItself ? ExitCodes.Success : ExitCodes.Interrupted;
     }
 

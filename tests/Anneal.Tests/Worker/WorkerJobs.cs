@@ -21,6 +21,14 @@ internal static class WorkerJobs
     public static void DropBadShift(string root, string name) =>
         Drop(root, name, Stops(8), Vehicles().Replace("07:00", "7 o'clock", StringComparison.Ordinal));
 
+    /// <summary>The files of a valid job (10 stops), by name.</summary>
+    public static Dictionary<string, string> ValidFiles(int seed) => new()
+    {
+        ["depots.csv"] = "id,x,y\nD,0,0\n",
+        ["stops.csv"] = Stops(seed),
+        ["vehicles.csv"] = Vehicles(),
+    };
+
     /// <summary>A valid job written as the folder <paramref name="folder"/> (for `anneal queue submit`).</summary>
     public static string WriteValid(string folder, int seed) => Write(folder, Stops(seed), Vehicles());
 

@@ -7,7 +7,7 @@ namespace Anneal.Tests.Worker;
 /// The real `anneal worker` as a separate process: anneal.dll from the test's output folder (the test project
 /// references Anneal.Cli), run by the same dotnet host that runs the tests.
 /// </summary>
-internal sealed class WorkerProcess : IDisposable
+public sealed class WorkerProcess : IDisposable
 {
     private readonly Process _process;
     private readonly StringBuilder _log = new();
@@ -34,7 +34,10 @@ internal sealed class WorkerProcess : IDisposable
     }
 
     /// <param name="root">Holds inbox/ and outbox/ (working/ and failed/ default to beside the inbox); also the current folder.</param>
-    public static WorkerProcess Start(string root, params string[] args)
+    public static WorkerProcess Start(string root, params string[] args) => Start(root, new Dictionary<string, string>(), args);
+
+    /// <param name="settings">Worker settings that replace the test defaults, e.g. { "SettleSeconds", "1" }.</param>
+    public static WorkerProcess Start(string root, IReadOnlyDictionary<string, string> settings, params string[] args)
     {
         var info = new ProcessStartInfo(Environment.GetEnvironmentVariable("DOTNET_HOST_PATH") ?? "dotnet")
         {
@@ -54,6 +57,11 @@ internal sealed class WorkerProcess : IDisposable
         info.Environment["ANNEAL_Worker__PollSeconds"] = "0.2";
         info.Environment["ANNEAL_Worker__StatusSeconds"] = "0.2";
         info.Environment["ANNEAL_Worker__ShutdownTimeoutSeconds"] = "10";
+        foreach (var (key, value) in settings)
+        {
+            info.Environment["ANNEAL_Worker__" + key] = value;
+        }
+
         var process = new Process { StartInfo = info };
         var worker = new WorkerProcess(process);
         process.OutputDataReceived += (_, e) => worker.Append(e.Data);

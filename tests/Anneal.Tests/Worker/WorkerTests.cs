@@ -6,16 +6,8 @@ namespace Anneal.Tests.Worker;
 /// The worker's promises from issue 6, checked on the real executable: every job ends solved or explained exactly once,
 /// whatever happens to the process. Exit codes are the project's shared table (0 done, 130 stopped by a signal).
 /// </summary>
-public sealed class WorkerTests : TempFolderTest
+public sealed class WorkerTests : WorkerTest
 {
-    private string Inbox => Path.Combine(Dir, "inbox");
-
-    private string Outbox => Path.Combine(Dir, "outbox");
-
-    private string Working => Path.Combine(Dir, "working");
-
-    private string Failed => Path.Combine(Dir, "failed");
-
     [Fact]
     public void Valid_jobs_are_solved_and_broken_ones_explained_with_row_and_column()
     {
@@ -124,63 +116,4 @@ public sealed class WorkerTests : TempFolderTest
         Assert.Equal(["long"], Names(Inbox));
         Assert.Empty(Directory.GetDirectories(Working));
     }
-
-    private void WaitUntilSolving(WorkerProcess worker)
-    {
-        var deadline = DateTime.UtcNow.AddSeconds(30);
-        while (DateTime.UtcNow < deadline)
-        {
-            foreach (var file in Directory.Exists(Working) ? Directory.GetFiles(Working, "*.status.json") : [])
-            {
-                try
-                {
-                    if (Json(file).GetProperty("running").EnumerateArray().Any(j => j.GetProperty("solvers").GetArrayLength() > 0))
-                    {
-                        return;
-                    }
-                }
-                catch (Exception e) when (e is IOException or JsonException)
-                {
-                    // Replaced while being read; look again.
-                }
-            }
-
-            Thread.Sleep(100);
-        }
-
-        Assert.Fail("the worker never reported a running solver; its log:\n" + worker.Log);
-    }
-
-    private static void AssertComplete(string folder, bool interrupted)
-    {
-        foreach (var file in new[] { "routes.csv", "summary.json", "trace.csv", "job.json" })
-        {
-            Assert.True(File.Exists(Path.Combine(folder, file)), $"{file} is missing in {folder}");
-        }
-
-        Assert.Equal(interrupted, Json(Path.Combine(folder, "summary.json")).GetProperty("interrupted").GetBoolean());
-    }
-
-    /// <summary>No job left in the inbox or a worker's folder, and no partial folder anywhere.</summary>
-    private void AssertNothingLeft()
-    {
-        Assert.Empty(Directory.GetFileSystemEntries(Inbox));
-        Assert.Empty(Directory.GetDirectories(Working));
-        Assert.Empty(Directory.GetFiles(Working, "*.lock"));
-        Assert.Empty(Directory.GetDirectories(Outbox, ".*"));
-        Assert.Empty(Directory.GetDirectories(Failed, ".*"));
-    }
-
-    private static JsonElement Record(string folder) => Json(Path.Combine(folder, "job.json"));
-
-    private static JsonElement Json(string path)
-    {
-        using var document = JsonDocument.Parse(File.ReadAllBytes(path));
-        return document.RootElement.Clone();
-    }
-
-    private static string[] Names(string folder) =>
-        Directory.Exists(folder)
-            ? Directory.GetFileSystemEntries(folder).Select(p => Path.GetFileName(p)).Where(n => !n.StartsWith('.')).Order(StringComparer.Ordinal).ToArray()
-            : [];
 }
