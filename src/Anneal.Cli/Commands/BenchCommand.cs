@@ -134,8 +134,12 @@ public static class BenchCommand
         }
 
         var stats = ExperimentReport.Write(folder, outcome, machine, referencePath);
-        w.WriteLine();
-        WriteTable(w, SummaryTables.Configs(stats));
+        if (stats.Configs.Count > 0)
+        {
+            w.WriteLine();
+            WriteTable(w, SummaryTables.Configs(stats));
+        }
+
         if (SummaryTables.Bounds(outcome.PlanRows()) is { } bounds)
         {
             w.WriteLine();

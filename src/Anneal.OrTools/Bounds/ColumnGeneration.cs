@@ -15,6 +15,9 @@ internal sealed class ColumnGeneration(RelaxedInstance relaxed, int minVehicles,
 {
     private const int ColumnsPerKind = 150;
 
+    /// <summary>While heuristics still find columns, an exact pricing this often keeps a proven bound coming.</summary>
+    private static readonly TimeSpan ExactEvery = TimeSpan.FromSeconds(5);
+
     private static readonly bool Debug = Environment.GetEnvironmentVariable("ANNEAL_BOUND_DEBUG") == "1";
     private static readonly Stopwatch Clock = Stopwatch.StartNew();
 
@@ -46,6 +49,7 @@ internal sealed class ColumnGeneration(RelaxedInstance relaxed, int minVehicles,
         var least = new double[kinds.Count];
         var dual = new double[relaxed.StopCount];
         double exactSeconds = 2;
+        var sinceExact = Stopwatch.StartNew();
         while (!stop.IsCancellationRequested)
         {
             Rounds++;
@@ -64,10 +68,12 @@ internal sealed class ColumnGeneration(RelaxedInstance relaxed, int minVehicles,
             var duals = master.Duals();
             Array.Copy(duals.Stop, dual, dual.Length);
             int added = Price(master, networks, labeling, duals, dual, exact: false, least, stop);
-            if (added > 0)
+            if (added > 0 && sinceExact.Elapsed < ExactEvery)
             {
                 continue;
             }
+
+            sinceExact.Restart();
 
             // An exact run far from convergence can take long; cap it, and let a cut-short one still bring its columns in.
             using var capped = CancellationTokenSource.CreateLinkedTokenSource(stop);
@@ -82,10 +88,25 @@ internal sealed class ColumnGeneration(RelaxedInstance relaxed, int minVehicles,
 
             if (added == 0 && proven && !stop.IsCancellationRequested)
             {
-                Converged = true;
+                // Nothing new to add: converged, unless the negative routes found were all in the master already (rounding).
+                Converged = Converges(least);
                 return;
             }
         }
+    }
+
+    /// <summary>No route of negative reduced cost is left (beyond rounding): the master's LP value is the relaxation's.</summary>
+    private static bool Converges(double[] least)
+    {
+        foreach (double c in least)
+        {
+            if (c < -1e-6)
+            {
+                return false;
+            }
+        }
+
+        return true;
     }
 
     /// <summary>Prices every kind; returns the columns added, and in <paramref name="least"/> each kind's proven least reduced cost (NaN when the run was not complete).</summary>
