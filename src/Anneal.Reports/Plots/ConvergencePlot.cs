@@ -80,7 +80,7 @@ public static class ConvergencePlot
         }
 
         var bound = Bound(solvers);
-        if (bound is { } b && !BoundOnly(solvers, b.Solver))
+        if (bound is { } b && !DrawnRising(solvers, b.Value))
         {
             var line = plot.Add.HorizontalLine(b.Value, 1.5f, Palette.Bound, LinePattern.Dashed);
             line.LegendText = $"lower bound ({b.Solver})";
@@ -143,13 +143,14 @@ public static class ConvergencePlot
         return (xs.ToArray(), ys.ToArray(), feasibleFrom < 0 ? xs.Count : feasibleFrom);
     }
 
-    private static bool BoundOnly(IReadOnlyList<SolverRun> solvers, string name)
+    /// <summary>A bound-only solver's rising line already ends at (or above) this bound: no second dashed line for it.</summary>
+    private static bool DrawnRising(IReadOnlyList<SolverRun> solvers, double bound)
     {
         foreach (var s in solvers)
         {
-            if (s.Solver == name)
+            if (s.BoundOnly && s.LowerBound is { } own && own >= bound)
             {
-                return s.BoundOnly;
+                return true;
             }
         }
 
