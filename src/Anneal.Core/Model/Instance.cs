@@ -149,5 +149,8 @@ public sealed class Instance
 
     /// <summary>Same instance with another objective or rule set (used by benchmarks and tests).</summary>
     public Instance With(Objective? objective = null, RuleSet? rules = null, IReadOnlyList<Vehicle>? vehicles = null) =>
-        new(Name, Stops, Depots, vehicles ?? Vehicles, DimensionNames, EquipmentNames, rules ?? Rules, objective ?? Objective, Travel, Units);
+        new(Name, Stops, Depots, vehicles ?? Vehicles, DimensionNames, EquipmentNames, rules ?? Rules, objective ?? Objective, Travel, Units) { LatLon = LatLon };
+
+    /// <summary>Stops and depots hold degrees: <see cref="Stop.X"/> is the longitude, <see cref="Stop.Y"/> the latitude (WGS 84).</summary>
+    public bool LatLon { get; init; }
 }

@@ -81,7 +81,7 @@ internal static class JobAssembler
                 : TravelTable.Planar(x, y, false, timePerDistance: 60.0 / settings.SpeedKmh);
 
         return new Instance(name, stops, depots, vehicles, dimensions, equipment.Names.ToArray(), settings.Rules, settings.Objective, travel,
-            units: Units.Minutes);
+            units: Units.Minutes) { LatLon = system == CoordinateSystem.LatLon };
     }
 
     /// <summary>Location index of every id for the matrix: stops first, then depots.</summary>

@@ -8,6 +8,18 @@ public sealed class RoutesCsvArtifact : IRunArtifact
     public void Write(RunContext run) => RoutesCsvWriter.Write(run.PathOf(RoutesCsvWriter.FileName), run.Instance, run.Plan);
 }
 
+/// <summary>routes.geojson, for jobs whose places are in degrees (latitude and longitude) only.</summary>
+public sealed class RoutesGeoJsonArtifact : IRunArtifact
+{
+    public void Write(RunContext run)
+    {
+        if (run.Instance.LatLon)
+        {
+            RoutesGeoJsonWriter.Write(run.PathOf(RoutesGeoJsonWriter.FileName), run.Instance, run.Plan);
+        }
+    }
+}
+
 /// <summary>summary.json.</summary>
 public sealed class SummaryJsonArtifact : IRunArtifact
 {
