@@ -18,10 +18,9 @@ internal sealed record SettingsFile
     public double SpeedKmh { get; init; } = DefaultSpeedKmh;
     public double DetourFactor { get; init; } = DefaultDetour;
 
-    private static readonly string[] TopKeys = ["objective", "timeSeconds", "solvers", "seed", "travel", "rules"];
-    private static readonly string[] TravelKeys = ["speedKmh", "detourFactor"];
-    private static readonly (string Name, string PriceKey)[] RuleKeys =
-        [("timeWindows", "pricePerMinute"), ("capacity", "pricePerUnit"), ("shiftEnd", "pricePerMinute"), ("maxDuration", "pricePerMinute"), ("unserved", "pricePerStop")];
+    private static readonly string[] TopKeys = SettingsKeys.Top;
+    private static readonly string[] TravelKeys = SettingsKeys.Travel;
+    private static readonly (string Name, string PriceKey)[] RuleKeys = SettingsKeys.Rules;
 
     public static SettingsFile Read(byte[] bytes, ProblemList problems)
     {
