@@ -26,7 +26,7 @@ public sealed class JobProcessor(
             }
 
             string folder = FailedJobs.Move(folders, workerId, job, $"Job '{job.Id}' could not be read: {Count(lines.Count)} in the input.", lines);
-            log.LogWarning("Job {JobId} has invalid input ({Problems}); moved to {Folder}", job.Id, Count(lines.Count), folder);
+            log.LogWarning("Job {JobId} has invalid input ({Problems}; the first: {First}); moved to {Folder}", job.Id, Count(lines.Count), lines.Count > 0 ? lines[0] : "none named", folder);
             return (JobResult.Failed, folder);
         }
         catch (Exception e) when (e is not OperationCanceledException)

@@ -61,6 +61,9 @@ public sealed class WorkerOptions
     /// <summary>How often the status file is rewritten.</summary>
     public double StatusSeconds { get; set; } = 2;
 
+    /// <summary>Create the inbox when it does not exist; otherwise a missing inbox (often a mistyped path) is refused at start-up.</summary>
+    public bool CreateFolders { get; set; }
+
     /// <summary>How often the working folder is searched for jobs left by dead workers (also done at start-up).</summary>
     public double RecoverSeconds { get; set; } = 30;
 }

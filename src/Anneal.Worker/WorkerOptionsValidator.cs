@@ -17,6 +17,11 @@ public sealed class WorkerOptionsValidator(SolverCatalog catalog, WorkerSettings
         if (problems.Count == 0)
         {
             Distinct(problems, WorkerFolders.From(options));
+            if (!options.CreateFolders && !Directory.Exists(options.Inbox))
+            {
+                problems.Add($"the inbox {Path.GetFullPath(options.Inbox!)} does not exist: check the path, or give --create-folders "
+                    + "(Worker:CreateFolders) to create it with the folders beside it");
+            }
         }
 
         AtLeast(problems, options.ConcurrentJobs, 1, "ConcurrentJobs (--jobs)");

@@ -21,9 +21,10 @@ public static class WorkerCommand
         var threads = new Option<string?>("--threads") { Description = "Independent searches per solver within a job. Default 1.", HelpName = "n" };
         var solvers = new Option<string?>("--solvers") { Description = "Comma-separated solver names for every job. Default: each job's list, else all that apply.", HelpName = "list" };
         var once = new Option<bool>("--once") { Description = "Solve what the inbox holds, then exit (for cron and scripts)." };
+        var create = new Option<bool>("--create-folders") { Description = "Create the inbox (and the folders beside it) when it does not exist; otherwise a missing inbox is refused." };
         var command = new Command("worker",
             "Watch an inbox and solve every job in it; settings also come from appsettings.json and ANNEAL_Worker__* variables. Exit 0 after --once, 130 when stopped.");
-        foreach (Option option in new Option[] { inbox, outbox, time, jobs, threads, solvers, once })
+        foreach (Option option in new Option[] { inbox, outbox, time, jobs, threads, solvers, once, create })
         {
             command.Options.Add(option);
         }
@@ -37,6 +38,11 @@ public static class WorkerCommand
             Put(settings, nameof(WorkerOptions.ConcurrentJobs), parse.GetValue(jobs));
             Put(settings, nameof(WorkerOptions.ThreadsPerJob), parse.GetValue(threads));
             Put(settings, nameof(WorkerOptions.Solvers), parse.GetValue(solvers));
+            if (parse.GetValue(create))
+            {
+                Put(settings, nameof(WorkerOptions.CreateFolders), "true");
+            }
+
             return Execute(settings, parse.GetValue(once), context);
         });
         return command;
