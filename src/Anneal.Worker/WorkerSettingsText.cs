@@ -79,6 +79,14 @@ public sealed class WorkerSettingsText(IConfiguration configuration)
             return ok;
         }
 
+        if (type == typeof(long))
+        {
+            expects = "a whole number, e.g. 268435456";
+            bool ok = long.TryParse(text, NumberStyles.AllowLeadingSign, CultureInfo.InvariantCulture, out long l);
+            value = l;
+            return ok;
+        }
+
         if (type == typeof(double))
         {
             expects = "a number of seconds with a dot for decimals, e.g. 2.5";

@@ -107,6 +107,24 @@ public sealed partial class MessageTests : CommandTest
     }
 
     [Fact]
+    public void Every_worker_setting_is_bound_and_a_wrong_one_named()
+    {
+        // Each setting given a value that fits no kind: the hand binder must know every one (none may throw).
+        var settings = typeof(Anneal.Worker.WorkerOptions).GetProperties().ToDictionary(p => "Worker:" + p.Name, p => (string?)"~wrong~");
+        settings["Worker:Inbox"] = Dir;
+        settings["Worker:Outbox"] = Path.Combine(Dir, "out");
+
+        Assert.Equal(ExitCodes.InvalidInput, WorkerCommand.Execute(settings, once: true, new CliContext(Out, Err)));
+
+        foreach (var property in typeof(Anneal.Worker.WorkerOptions).GetProperties().Where(p => p.PropertyType != typeof(string)))
+        {
+            Assert.Contains($"Worker:{property.Name}", Err.ToString(), StringComparison.Ordinal);
+        }
+
+        Assert.DoesNotMatch(DotNet(), All);
+    }
+
+    [Fact]
     public void A_missing_input_a_missing_routes_file_and_an_unwritable_output_folder_each_get_their_own_sentence()
     {
         Directory.CreateDirectory(Path.Combine(Dir, "harbour-small"));
