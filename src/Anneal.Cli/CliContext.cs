@@ -17,6 +17,9 @@ public sealed record CliContext(TextWriter Out, TextWriter Err)
 
     public Func<DateTime> Now { get; init; } = () => DateTime.Now;
 
+    /// <summary>Time since the process started, which `solve` counts against its budget; zero in tests (they share one process).</summary>
+    public Func<TimeSpan> SinceStart { get; init; } = () => TimeSpan.Zero;
+
     /// <summary>The solver catalogue, job runner and run writers (<see cref="CliServices"/>); built once, read-only.</summary>
     public IServiceProvider Services { get; init; } = CliServices.Shared;
 }

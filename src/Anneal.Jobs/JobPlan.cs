@@ -5,9 +5,10 @@ using Anneal.Formats.Input;
 namespace Anneal.Jobs;
 
 /// <summary>A request resolved against its job: the instance under the chosen objective, the solvers and their options.</summary>
-public sealed record JobPlan(LoadedInput Input, Instance Instance, IReadOnlyList<ISolver> Solvers, SolveOptions Options)
+/// <param name="Seconds">The budget asked for (the solvers' own may be shorter, see <see cref="WallClockBudget"/>).</param>
+/// <param name="Notes">What the run should say as a whole: solvers left out of the defaults, advice, the budget kept for writing.</param>
+public sealed record JobPlan(LoadedInput Input, Instance Instance, IReadOnlyList<ISolver> Solvers, SolveOptions Options, double Seconds, IReadOnlyList<string> Notes)
 {
-    public double Seconds => Options.TimeLimit.TotalSeconds;
 
     public int Seed => Options.Seed;
 

@@ -23,4 +23,14 @@ public sealed record JobRequest
 
     /// <summary>Independent searches per solver (SolveOptions.Threads).</summary>
     public int Threads { get; init; } = 1;
+
+    /// <summary>
+    /// True when the budget covers the whole run, its files included (solve, the worker): the solvers then get what
+    /// is left after <see cref="Spent"/> and the expected writing time (see <see cref="WallClockBudget"/>).
+    /// False (bench): the budget is the solvers' own.
+    /// </summary>
+    public bool WholeRun { get; init; }
+
+    /// <summary>Time of the budget gone before the run (start-up, reading the job).</summary>
+    public TimeSpan Spent { get; init; }
 }

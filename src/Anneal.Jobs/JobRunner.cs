@@ -25,20 +25,41 @@ public sealed class JobRunner(SolverCatalog catalog)
             solvers.Add(catalog.Create(name));
         }
 
+        double seconds = request.TimeSeconds ?? input.Settings.TimeSeconds ?? request.DefaultTimeSeconds;
+        var notes = new List<string>();
+        if (request.Solvers is null && input.Settings.Solvers is null)
+        {
+            notes.AddRange(catalog.LeftOut(instance));
+        }
+
+        foreach (var solver in solvers)
+        {
+            if (solver is ISolverAdvice advice && advice.BeforeRun(instance) is { } text)
+            {
+                notes.Add($"{solver.Name}: {text}");
+            }
+        }
+
+        var share = request.WholeRun ? WallClockBudget.SolverShare(seconds, request.Spent, instance, solvers) : TimeSpan.FromSeconds(seconds);
+        if (request.WholeRun && WallClockBudget.Note(seconds, share, instance) is { } kept)
+        {
+            notes.Add(kept);
+        }
+
         var options = new SolveOptions
         {
-            TimeLimit = TimeSpan.FromSeconds(request.TimeSeconds ?? input.Settings.TimeSeconds ?? request.DefaultTimeSeconds),
+            TimeLimit = share,
             IterationLimit = request.Iterations,
             TargetObjective = request.Target,
             Seed = request.Seed ?? input.Settings.Seed ?? 1,
             Threads = request.Threads,
         };
-        return new JobPlan(input, instance, solvers, options);
+        return new JobPlan(input, instance, solvers, options, seconds, notes);
     }
 
     /// <param name="progress">Receives (solver name, trace point) from every solver as it improves, on the solvers' threads.</param>
     public JobRun Run(JobPlan plan, Action<string, TracePoint>? progress, CancellationToken cancel) =>
-        new(plan, RunCoordinator.Run(plan.Instance, plan.Solvers, plan.Options, progress, cancel, ResultJudge.Judge));
+        new(plan, RunCoordinator.Run(plan.Instance, plan.Solvers, plan.Options, progress, cancel, ResultJudge.Judge) with { Notes = plan.Notes });
 
     public JobRun Run(LoadedInput input, JobRequest request, Action<string, TracePoint>? progress, CancellationToken cancel) =>
         Run(Prepare(input, request), progress, cancel);

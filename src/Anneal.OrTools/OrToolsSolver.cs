@@ -12,8 +12,15 @@ namespace Anneal.OrTools;
 /// compare directly with SA's and tabu's. Construction and model building count against the budget, and a native
 /// search that does not stop by its deadline is left behind with its best plan so far returned.
 /// </summary>
-public sealed class OrToolsSolver : ISolver
+public sealed class OrToolsSolver : ISolver, ISolverAdvice
 {
+    /// <summary>
+    /// Above this many stops `ortools` is left out of the default solvers: its model needs hundreds of megabytes
+    /// (about 800 MB at 10,000 stops and 1,500 vehicles, more than the other solvers together) and its search rarely
+    /// improves on the construction it starts from within minutes. Named explicitly, it still runs.
+    /// </summary>
+    public const int DefaultStopLimit = 5000;
+
     private readonly OrToolsSettings _settings;
     private readonly IStartPlan? _start;
 
@@ -27,6 +34,24 @@ public sealed class OrToolsSolver : ISolver
     public string Name => "ortools";
 
     public string? Declines(Instance instance) => null;
+
+    public string? LeftOutOfDefaults(Instance instance) => instance.StopCount <= DefaultStopLimit ? null : FormattableString.Invariant(
+        $"ortools is left out of the default solvers above {DefaultStopLimit:N0} stops (this job has {instance.StopCount:N0}): its model would need about {ExpectedMegabytes(instance):N0} MB and its search rarely improves on the construction it starts from at this size; name it in --solvers to run it anyway");
+
+    public string? BeforeRun(Instance instance) => instance.StopCount <= RoutingModelBuilder.MatrixLimit ? null : FormattableString.Invariant(
+        $"expected peak memory with OR-Tools' model about {ExpectedMegabytes(instance):N0} MB ({instance.StopCount:N0} stops, {instance.Vehicles.Count:N0} vehicles)");
+
+    /// <summary>
+    /// The process's peak memory with OR-Tools' model, in MB, fitted to measurements on subsets of the 10,000-stop
+    /// planar instance (2,000 to 10,000 stops, 300 to 1,500 vehicles; see DEVELOPERS.md): about 110 MB, 25 KB per
+    /// stop, and 28 bytes per stop and vehicle (OR-Tools keeps per-vehicle data over all nodes). Rounded up to 50 MB.
+    /// </summary>
+    public static double ExpectedMegabytes(Instance instance)
+    {
+        double n = instance.StopCount, v = instance.Vehicles.Count;
+        double mb = 110 + (n * 25.0 / 1024) + (n * v * 28 / (1024 * 1024));
+        return Math.Ceiling(mb / 50) * 50;
+    }
 
     public SolverResult Solve(Instance instance, SolveOptions options, IProgress<TracePoint>? progress, CancellationToken cancel)
     {
@@ -55,24 +80,19 @@ public sealed class OrToolsSolver : ISolver
         double constructionSeconds = clock.Elapsed.TotalSeconds;
 
         var search = new RoutingSearch(instance, options, _settings, keeper, clock);
+        bool leftBehind = false;
         Exception? failure = null;
-        var native = new Thread(() =>
+        bool skipped = budget.IsCancellationRequested;
+        if (skipped)
         {
-            try
-            {
-                search.Run(warmFeasible && !budget.IsCancellationRequested ? warm : null, limit);
-            }
-            catch (Exception e)
-            {
-                failure = e;
-            }
-        })
+            // The construction took the whole budget (or a stop came): there is no time for OR-Tools' model.
+            search.Stop();
+        }
+        else
         {
-            IsBackground = true,
-            Name = "ortools search",
-        };
-        native.Start();
-        bool leftBehind = !Await(native, search, limit, clock, cancel);
+            leftBehind = !RunNative(search, warmFeasible ? warm : null, limit, clock, cancel, out failure);
+        }
+
         keeper.Close();
         if (failure is ScalingDeclinedException declined)
         {
@@ -88,7 +108,7 @@ public sealed class OrToolsSolver : ISolver
         var best = keeper.Best;
         var notes = new List<string>(best is null ? [] : search.MappingNotes)
         {
-            FormattableString.Invariant($"{(search.Start.Length > 0 ? search.Start : "no search")}, metaheuristic {_settings.Metaheuristic}; construction {constructionSeconds:0.0} s, model {search.BuildSeconds:0.0} s; {keeper.Solutions} solutions accepted"),
+            FormattableString.Invariant($"{(search.Start.Length > 0 ? search.Start : skipped ? "no OR-Tools search (no time left after the construction)" : "no search")}, metaheuristic {_settings.Metaheuristic}; construction {constructionSeconds:0.0} s, model {search.BuildSeconds:0.0} s; {keeper.Solutions} solutions accepted"),
         };
         if (keeper.BestSource == "construction")
         {
@@ -130,6 +150,31 @@ public sealed class OrToolsSolver : ISolver
 
         var result = new SolverResult(Name, keeper.BestPlan, seconds, trace.SecondsToBest, trace.Points, status, null, notes) { HasPlan = best is not null };
         return new OrToolsRun(result, search.Engine?.Cost.Reported, search.RoutingStatus, search.Engine?.Cost, search.Engine?.Plan);
+    }
+
+    /// <summary>Runs the native part on its own thread; false when it had to be left behind.</summary>
+    private bool RunNative(RoutingSearch search, Core.Plans.Plan? warm, TimeSpan limit, Stopwatch clock, CancellationToken cancel, out Exception? failure)
+    {
+        Exception? caught = null;
+        var native = new Thread(() =>
+        {
+            try
+            {
+                search.Run(warm, limit);
+            }
+            catch (Exception e)
+            {
+                caught = e;
+            }
+        })
+        {
+            IsBackground = true,
+            Name = "ortools search",
+        };
+        native.Start();
+        bool finished = Await(native, search, limit, clock, cancel);
+        failure = finished ? caught : null;
+        return finished;
     }
 
     /// <summary>

@@ -50,6 +50,8 @@ public sealed class JobProcessor(
                 Solvers = string.IsNullOrWhiteSpace(options.Solvers) ? null : options.Solvers,
                 DefaultTimeSeconds = options.TimeSeconds,
                 Threads = options.ThreadsPerJob,
+                WholeRun = true,
+                Spent = clock.GetUtcNow() - job.ClaimedAt,
             });
         }
         catch (UnknownSolverException e)
@@ -64,6 +66,16 @@ public sealed class JobProcessor(
 
         log.LogInformation("Job {JobId} started (attempt {Attempt}): {Stops} stops, solvers {Solvers}, up to {Budget:0.#} s",
             job.Id, job.Attempt, plan.Instance.StopCount, string.Join(",", plan.SolverNames), plan.Seconds);
+        foreach (var note in plan.Notes)
+        {
+            log.LogInformation("Job {JobId}: {Note}", job.Id, note);
+        }
+
+        if (Oversubscription.Warning(plan.Solvers.Count, plan.Options.Threads, options.ConcurrentJobs, Environment.ProcessorCount) is { } crowded)
+        {
+            log.LogWarning("Job {JobId}: {Warning}", job.Id, crowded);
+        }
+
         var run = runner.Run(plan, progress.Report, stop);
         bool interrupted = run.Interrupted;
         bool requeue = interrupted && options.OnShutdown == ShutdownChoice.Requeue;

@@ -58,7 +58,7 @@ public static class SolveCommand
         JobPlan plan;
         try
         {
-            plan = runner.Prepare(input, request.ToJob(DefaultTimeSeconds));
+            plan = runner.Prepare(input, request.ToJob(DefaultTimeSeconds, context.SinceStart()));
         }
         catch (UnknownSolverException e)
         {
@@ -73,6 +73,17 @@ public static class SolveCommand
         {
             context.Err.WriteLine(string.Create(CultureInfo.InvariantCulture,
                 $"Solving {InstanceDescription.Size(instance)} with {string.Join(", ", plan.SolverNames)} for up to {plan.Seconds:0.##} s (seed {plan.Seed}); Ctrl+C stops early and keeps the best plan."));
+        }
+
+        // Said even with --quiet: they change what the run does or what it can be compared with.
+        foreach (var note in plan.Notes)
+        {
+            context.Err.WriteLine("note: " + note);
+        }
+
+        if (Oversubscription.Warning(plan.Solvers.Count, plan.Options.Threads, 1, Environment.ProcessorCount) is { } crowded)
+        {
+            context.Err.WriteLine("warning: " + crowded);
         }
 
         using var stop = CancellationTokenSource.CreateLinkedTokenSource(context.Cancel);

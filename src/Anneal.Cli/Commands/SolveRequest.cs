@@ -17,8 +17,11 @@ public sealed record SolveRequest
     public bool Quiet { get; init; }
 
     /// <summary>The request as the job runner takes it (the objective's text already checked by the parser).</summary>
-    public JobRequest ToJob(double defaultTimeSeconds) => new()
+    /// <param name="spent">Time since the process started: the budget covers the whole run, start-up and files included.</param>
+    public JobRequest ToJob(double defaultTimeSeconds, TimeSpan spent) => new()
     {
+        WholeRun = true,
+        Spent = spent,
         Solvers = Solvers,
         TimeSeconds = TimeSeconds,
         DefaultTimeSeconds = defaultTimeSeconds,

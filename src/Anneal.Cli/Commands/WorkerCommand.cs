@@ -1,5 +1,6 @@
 using System.CommandLine;
 using System.Globalization;
+using Anneal.Cli.Reporting;
 using Anneal.Formats.Output;
 using Anneal.Worker;
 using Microsoft.Extensions.DependencyInjection;
@@ -56,7 +57,11 @@ public static class WorkerCommand
         {
             // Building already reads the settings (the shutdown timeout is one of them), so it may refuse them too.
             using var host = WorkerHost.Build(settings, run, s => s.AddAnnealHost());
-            using var outside = context.Cancel.Register(() => host.Services.GetRequiredService<IHostApplicationLifetime>().StopApplication());
+            var lifetime = host.Services.GetRequiredService<IHostApplicationLifetime>();
+            using var outside = context.Cancel.Register(lifetime.StopApplication);
+
+            // The host's own handling stops it on the first signal; this one ends the process on the second.
+            using var signals = context.HandleSignals ? new ShutdownSignals(lifetime.StopApplication) : null;
             host.Run();
         }
         catch (Exception e) when (Invalid(e) is { } invalid)

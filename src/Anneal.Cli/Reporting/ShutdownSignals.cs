@@ -3,55 +3,88 @@ using System.Runtime.InteropServices;
 namespace Anneal.Cli.Reporting;
 
 /// <summary>
-/// Turns Ctrl+C and SIGTERM into a cancellation so solvers stop and the best plan so far is written.
-/// A second Ctrl+C is left to the default handling and ends the process at once.
+/// Turns the first Ctrl+C (SIGINT) or SIGTERM into a cancellation, so solvers stop and the best plan so far is
+/// written (exit 130); a second signal of either kind ends the process at once, whatever it is doing.
 /// </summary>
 public sealed class ShutdownSignals : IDisposable
 {
-    private readonly CancellationTokenSource _source;
-    private readonly PosixSignalRegistration? _sigterm;
+    /// <summary>Exit code of a process ended by the second signal (as for an interrupted run).</summary>
+    public const int ExitCode = 130;
 
-    public ShutdownSignals(CancellationTokenSource source)
+    private readonly Action _stop;
+    private readonly Action _exitNow;
+    private readonly List<PosixSignalRegistration> _registrations = [];
+    private int _signals;
+
+    /// <param name="stop">What the first signal does (cancel the run, stop the host).</param>
+    /// <param name="exitNow">What the second does; by default the process exits at once with <see cref="ExitCode"/>.</param>
+    public ShutdownSignals(Action stop, Action? exitNow = null)
     {
-        _source = source;
-        Console.CancelKeyPress += OnCancelKeyPress;
-        try
+        _stop = stop;
+        _exitNow = exitNow ?? ExitNow;
+        foreach (var signal in new[] { PosixSignal.SIGINT, PosixSignal.SIGTERM })
         {
-            _sigterm = PosixSignalRegistration.Create(PosixSignal.SIGTERM, context =>
+            try
             {
-                context.Cancel = true;
-                Stop();
-            });
+                _registrations.Add(PosixSignalRegistration.Create(signal, OnSignal));
+            }
+            catch (PlatformNotSupportedException)
+            {
+                // A platform without this signal still has the others.
+            }
         }
-        catch (PlatformNotSupportedException)
+    }
+
+    public ShutdownSignals(CancellationTokenSource source, Action? exitNow = null)
+        : this(() => Cancel(source), exitNow)
+    {
+    }
+
+    /// <summary>How many signals arrived so far.</summary>
+    public int Received => Volatile.Read(ref _signals);
+
+    /// <summary>Handles one signal as the operating system's would be; public so tests can drive it without one.</summary>
+    public void Signal()
+    {
+        if (Interlocked.Increment(ref _signals) == 1)
         {
-            // Platforms without SIGTERM still have Ctrl+C.
-            _sigterm = null;
+            _stop();
+        }
+        else
+        {
+            _exitNow();
         }
     }
 
     public void Dispose()
     {
-        Console.CancelKeyPress -= OnCancelKeyPress;
-        _sigterm?.Dispose();
-    }
-
-    private void OnCancelKeyPress(object? sender, ConsoleCancelEventArgs e)
-    {
-        if (_source.IsCancellationRequested)
+        foreach (var registration in _registrations)
         {
-            return;
+            registration.Dispose();
         }
-
-        e.Cancel = true;
-        Stop();
     }
 
-    private void Stop()
+    private void OnSignal(PosixSignalContext context)
+    {
+        context.Cancel = true;
+        Signal();
+    }
+
+    /// <summary>
+    /// Ends the process now: no waiting for solver threads or native searches, nor for hosted services. Files are
+    /// written through a temporary name and a rename, so none is left half-written.
+    /// </summary>
+    private static void ExitNow()
+    {
+        Console.Error.WriteLine("anneal: second signal: stopping at once.");
+        Environment.Exit(ExitCode);
+    }
+
+    private static void Cancel(CancellationTokenSource source)
     {
         try
         {
-            _source.Cancel();
+            source.Cancel();
         }
         catch (ObjectDisposedException)
         {

@@ -3,9 +3,16 @@ using Anneal.Core.Model;
 
 namespace Anneal.Core.Solving;
 
-/// <summary>Runs several solvers side by side on one instance with the same wall-clock budget.</summary>
+/// <summary>
+/// Runs several solvers side by side on one instance with the same wall-clock budget. A solver still running
+/// <see cref="Grace"/> past its budget (or past a stop request) is no longer waited for: the run goes on with the
+/// others' plans, and that solver is reported without one.
+/// </summary>
 public static class RunCoordinator
 {
+    /// <summary>How long past the budget a solver is waited for: the tolerance every budget allows, max(2 s, 5%).</summary>
+    public static TimeSpan Grace(TimeSpan budget) => TimeSpan.FromSeconds(Math.Max(2, 0.05 * budget.TotalSeconds));
+
     /// <param name="solvers">Solver k runs with seed + k. One that declines the instance is not started.</param>
     /// <param name="progress">Receives (solver name, trace point) from every solver as it improves.</param>
     /// <param name="judge">Judges each result (the host's may also offer a better form of an infeasible plan); by default the evaluator's verdict on the plan as it is.</param>
@@ -18,8 +25,15 @@ public static class RunCoordinator
         Func<Instance, SolverResult, JudgedResult>? judge = null)
     {
         judge ??= static (instance, result) => new JudgedResult(result, PlanEvaluator.Evaluate(instance, result.Plan));
-        var results = new SolverResult[solvers.Count];
-        var threads = new List<Thread>(solvers.Count);
+        var clock = System.Diagnostics.Stopwatch.StartNew();
+
+        // Cancelled for solvers the run stops waiting for, so that those that look at it still stop (late); not
+        // disposed then, since they may still register with it.
+        var giveUp = CancellationTokenSource.CreateLinkedTokenSource(cancel);
+        var token = giveUp.Token;
+        var results = new SolverResult?[solvers.Count];
+        var traces = new List<TracePoint>[solvers.Count];
+        var threads = new List<(Thread Thread, int Index)>(solvers.Count);
         for (int k = 0; k < solvers.Count; k++)
         {
             var solver = solvers[k];
@@ -31,28 +45,63 @@ public static class RunCoordinator
 
             int index = k;
             var own = options with { Seed = options.Seed + index };
-            IProgress<TracePoint>? sink = progress is null ? null : new SynchronousProgress(p => progress(solver.Name, p));
-            threads.Add(new Thread(() => results[index] = solver.Solve(instance, own, sink, cancel))
+            var trace = traces[k] = [];
+            IProgress<TracePoint> sink = new SynchronousProgress(p =>
+            {
+                lock (trace)
+                {
+                    trace.Add(p);
+                }
+
+                progress?.Invoke(solver.Name, p);
+            });
+            threads.Add((new Thread(() => Volatile.Write(ref results[index], solver.Solve(instance, own, sink, token)))
             {
                 IsBackground = true,
                 Name = "solver " + solver.Name,
-            });
+            }, k));
         }
 
-        foreach (var t in threads)
+        foreach (var (t, _) in threads)
         {
             t.Start();
         }
 
-        foreach (var t in threads)
+        var grace = Grace(options.TimeLimit);
+        TimeSpan? stopAt = null;
+        foreach (var (t, _) in threads)
         {
-            t.Join();
+            while (!t.Join(TimeSpan.FromMilliseconds(50)))
+            {
+                stopAt ??= cancel.IsCancellationRequested ? clock.Elapsed : null;
+                var waitUntil = stopAt is { } at ? Min(at, options.TimeLimit) + grace : options.TimeLimit + grace;
+                if (clock.Elapsed > waitUntil)
+                {
+                    break;
+                }
+            }
         }
 
         var judged = new JudgedResult[results.Length];
+        bool left = false;
         for (int k = 0; k < results.Length; k++)
         {
-            judged[k] = judge(instance, results[k]);
+            left |= Volatile.Read(ref results[k]) is null;
+        }
+
+        if (left)
+        {
+            giveUp.Cancel();
+        }
+        else
+        {
+            giveUp.Dispose();
+        }
+
+        for (int k = 0; k < results.Length; k++)
+        {
+            var result = Volatile.Read(ref results[k]) ?? Overran(solvers[k].Name, clock.Elapsed, traces[k], grace, cancel.IsCancellationRequested);
+            judged[k] = judge(instance, result);
         }
 
         return new RunOutcome(judged, Choose(judged)) { Interrupted = cancel.IsCancellationRequested };
@@ -69,6 +118,22 @@ public static class RunCoordinator
 
         return PlanRanking.Best(ranked);
     }
+
+    /// <summary>A solver that did not return in time: its trace so far, no plan (it holds it), and why.</summary>
+    private static SolverResult Overran(string solver, TimeSpan elapsed, List<TracePoint> trace, TimeSpan grace, bool interrupted)
+    {
+        TracePoint[] points;
+        lock (trace)
+        {
+            points = [.. trace];
+        }
+
+        string reason = FormattableString.Invariant($"did not stop within {grace.TotalSeconds:0.#} s of its {(interrupted ? "stop request" : "budget")}; the run went on without its plan");
+        return new SolverResult(solver, Plans.Plan.Empty, elapsed.TotalSeconds, points.Length > 0 ? points[^1].Seconds : 0, points,
+            interrupted ? SolverStatus.Interrupted : SolverStatus.TimeLimit, null, [reason]) { HasPlan = false };
+    }
+
+    private static TimeSpan Min(TimeSpan a, TimeSpan b) => a < b ? a : b;
 
     private sealed class SynchronousProgress(Action<TracePoint> report) : IProgress<TracePoint>
     {

@@ -16,4 +16,7 @@ public sealed record RunOutcome(IReadOnlyList<JudgedResult> Results, int Chosen)
 
     /// <summary>True when a stop request cut the run short.</summary>
     public bool Interrupted { get; init; }
+
+    /// <summary>What the run as a whole should say (solvers left out of the defaults, the budget kept for output).</summary>
+    public IReadOnlyList<string> Notes { get; init; } = [];
 }

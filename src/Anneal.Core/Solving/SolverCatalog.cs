@@ -53,7 +53,8 @@ public sealed class SolverCatalog
         var list = new List<string>();
         foreach (var e in _entries)
         {
-            if (e.ByDefault && e.Create().Declines(instance) is null)
+            var solver = e.Create();
+            if (e.ByDefault && solver.Declines(instance) is null && (solver as ISolverAdvice)?.LeftOutOfDefaults(instance) is null)
             {
                 list.Add(e.Name);
             }
@@ -68,6 +69,22 @@ public sealed class SolverCatalog
         }
 
         return list;
+    }
+
+    /// <summary>Why default solvers that apply to the instance are left out of <see cref="Defaults"/> on it (one line each).</summary>
+    public IReadOnlyList<string> LeftOut(Instance instance)
+    {
+        var reasons = new List<string>();
+        foreach (var e in _entries)
+        {
+            var solver = e.Create();
+            if (e.ByDefault && solver.Declines(instance) is null && (solver as ISolverAdvice)?.LeftOutOfDefaults(instance) is { } reason)
+            {
+                reasons.Add(reason);
+            }
+        }
+
+        return reasons;
     }
 
     /// <summary>The command line's comma-separated list first, then the job's list, then the defaults; duplicates dropped.</summary>

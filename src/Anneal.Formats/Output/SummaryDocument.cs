@@ -4,6 +4,7 @@ namespace Anneal.Formats.Output;
 
 /// <summary>The whole summary.json.</summary>
 /// <param name="LowerBound">The strongest lower bound any solver proved on the objective of plans that keep the hard rules; null when none did.</param>
+/// <param name="Notes">What the run says as a whole (solvers left out of the defaults, a solver's expected memory, budget kept for writing).</param>
 public sealed record SummaryDocument(
     string Instance,
     string Format,
@@ -17,7 +18,8 @@ public sealed record SummaryDocument(
     bool Interrupted,
     IReadOnlyList<string> Cautions,
     DateTimeOffset GeneratedAt,
-    double? LowerBound = null);
+    double? LowerBound = null,
+    IReadOnlyList<string>? Notes = null);
 
 /// <summary>The written plan as the evaluator judged it.</summary>
 public sealed record PlanSummary(

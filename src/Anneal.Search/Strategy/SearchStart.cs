@@ -14,7 +14,11 @@ public sealed record SearchStart(Budget Budget, TraceRecorder Trace, CandidateLi
         var budget = new Budget(options, cancel);
         var trace = new TraceRecorder(progress, options.TimeLimit.TotalSeconds);
         var candidates = new CandidateLists(instance, neighbours);
-        return new SearchStart(budget, trace, candidates, InsertionSolver.Build(instance, candidates, cancel));
+
+        // The construction stops at the deadline too (with the stops placed so far), not only on a stop request.
+        using var deadline = CancellationTokenSource.CreateLinkedTokenSource(cancel);
+        deadline.CancelAfter(options.TimeLimit - TimeSpan.FromSeconds(Math.Min(budget.Elapsed, options.TimeLimit.TotalSeconds)));
+        return new SearchStart(budget, trace, candidates, InsertionSolver.Build(instance, candidates, deadline.Token));
     }
 
     /// <summary>Adaptive hard-rule prices for this instance, starting near the typical arc cost.</summary>

@@ -45,6 +45,7 @@ public static class RunSummary
             facts.Interrupted,
             Cautions.All,
             facts.GeneratedAt,
-            lowerBound);
+            lowerBound,
+            outcome?.Notes ?? []);
     }
 }
