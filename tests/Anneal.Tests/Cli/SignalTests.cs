@@ -45,8 +45,7 @@ public sealed class SignalTests : TempFolderTest
         string file = BenchmarkData.File("homberger/r1_10_1.txt");
         using var run = AnnealProcess.Start(Dir, ["solve", file, "--solvers", "ortools", "--time", "300", "--out", "out"]);
         Assert.True(run.WaitForLine(line => line.Contains("ortools:", StringComparison.Ordinal)), run.Log);
-        run.Terminate();
-        run.Interrupt();
+        run.SendTogether("TERM", "INT");
         Assert.True(run.WaitForExit(120) == ShutdownSignals.ExitCode, run.Log);
         Assert.Contains("second signal", run.Log, StringComparison.Ordinal);
     }

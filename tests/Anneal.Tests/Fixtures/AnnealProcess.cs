@@ -111,6 +111,21 @@ internal sealed class AnnealProcess : IDisposable
     /// <summary>SIGINT, as Ctrl+C in a terminal.</summary>
     public void Interrupt() => Send("INT");
 
+    /// <summary>
+    /// Delivers the signals together: the process is paused (SIGSTOP), the signals are queued, and it resumes
+    /// (SIGCONT) with all of them pending, so no work of its own can come between them however loaded the machine.
+    /// </summary>
+    public void SendTogether(params string[] signals)
+    {
+        Send("STOP");
+        foreach (var signal in signals)
+        {
+            Send(signal);
+        }
+
+        Send("CONT");
+    }
+
     private void Send(string signal)
     {
         using var kill = Process.Start("kill", ["-" + signal, _process.Id.ToString(System.Globalization.CultureInfo.InvariantCulture)]);

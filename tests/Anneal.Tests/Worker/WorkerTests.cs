@@ -84,8 +84,9 @@ public sealed class WorkerTests : WorkerTest
 
         using var a = WorkerProcess.Start(Dir, "--once", "--time", "0.5", "--solvers", "sa");
         using var b = WorkerProcess.Start(Dir, "--once", "--time", "0.5", "--solvers", "sa");
-        Assert.True(a.WaitForExit() == 0, a.Log);
-        Assert.True(b.WaitForExit() == 0, b.Log);
+        // Ten jobs between two processes: a hang guard generous enough for a loaded machine, not a measurement.
+        Assert.True(a.WaitForExit(120) == 0, a.Log);
+        Assert.True(b.WaitForExit(120) == 0, b.Log);
 
         // A second solve of a job would show as a "job-01-2" folder and as an eleventh "done" in the status files.
         Assert.Equal(jobs, Names(Outbox));
