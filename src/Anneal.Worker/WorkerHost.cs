@@ -26,7 +26,8 @@ public static class WorkerHost
 
     /// <param name="commandLine">Settings given on the command line, as configuration keys (e.g. "Worker:Inbox").</param>
     /// <param name="addAnneal">Registers the solvers and run writers, as the host wants them (<c>s => s.AddAnneal().AddOrTools()</c>).</param>
-    public static IHost Build(IReadOnlyDictionary<string, string?> commandLine, WorkerRun run, Action<IServiceCollection> addAnneal)
+    /// <param name="backEnd">Registers the loop that serves jobs from elsewhere (the database worker); null: the folder worker.</param>
+    public static IHost Build(IReadOnlyDictionary<string, string?> commandLine, WorkerRun run, Action<IServiceCollection> addAnneal, Action<IServiceCollection, IConfiguration>? backEnd = null)
     {
         var builder = Host.CreateEmptyApplicationBuilder(new HostApplicationBuilderSettings { ContentRootPath = Environment.CurrentDirectory });
         AddSettingsSources(builder.Configuration).AddInMemoryCollection(commandLine);
@@ -34,11 +35,7 @@ public static class WorkerHost
         builder.Logging.SetMinimumLevel(LogLevel.Information);
         builder.Logging.AddFilter("Microsoft", LogLevel.Warning);
         builder.Logging.AddConfiguration(builder.Configuration.GetSection("Logging"));
-        builder.Logging.AddSimpleConsole(o =>
-        {
-            o.SingleLine = true;
-            o.TimestampFormat = "yyyy-MM-dd HH:mm:ss ";
-        });
+        AddConsoleLog(builder.Logging, builder.Services);
 
         // stdout stays free for whatever calls the worker; every log line goes to stderr.
         builder.Services.Configure<ConsoleLoggerOptions>(o => o.LogToStandardErrorThreshold = LogLevel.Trace);
@@ -56,7 +53,34 @@ public static class WorkerHost
 
         // The IServiceCollection form of UseSystemd(): notify systemd when ready and stopping; a no-op outside systemd.
         services.AddSystemd();
-        services.AddHostedService<WorkerService>();
+        if (backEnd is null)
+        {
+            services.AddHostedService<WorkerService>();
+        }
+        else
+        {
+            backEnd(services, builder.Configuration);
+        }
+
         return builder.Build();
+    }
+
+    /// <summary>
+    /// Console logs: one plain line per event, or JSON lines for log collectors when Logging:Console:FormatterName is
+    /// "json" (ANNEAL_Logging__Console__FormatterName=json); the configuration's choice wins over the plain default.
+    /// </summary>
+    public static void AddConsoleLog(ILoggingBuilder logging, IServiceCollection services)
+    {
+        logging.AddConsole(o => o.FormatterName ??= ConsoleFormatterNames.Simple);
+        services.Configure<SimpleConsoleFormatterOptions>(o =>
+        {
+            o.SingleLine = true;
+            o.TimestampFormat = "yyyy-MM-dd HH:mm:ss ";
+        });
+        services.Configure<JsonConsoleFormatterOptions>(o =>
+        {
+            o.TimestampFormat = "yyyy-MM-ddTHH:mm:ss.fffzzz";
+            o.UseUtcTimestamp = false;
+        });
     }
 }

@@ -4,23 +4,26 @@ using Microsoft.Extensions.Options;
 namespace Anneal.Worker;
 
 /// <summary>Refuses settings that would only fail later, at start-up, with every problem named at once.</summary>
-public sealed class WorkerOptionsValidator(SolverCatalog catalog, WorkerSettingsText? text = null) : IValidateOptions<WorkerOptions>
+public sealed class WorkerOptionsValidator(SolverCatalog catalog, WorkerRun run, WorkerSettingsText? text = null) : IValidateOptions<WorkerOptions>
 {
     public ValidateOptionsResult Validate(string? name, WorkerOptions options)
     {
         // Values of the wrong kind first (they kept their defaults below), then the ranges and folders.
         var problems = new List<string>(text?.Problems ?? []);
-        Folder(problems, options.Inbox, "Inbox", "--inbox DIR", required: true);
-        Folder(problems, options.Outbox, "Outbox", "--outbox DIR", required: true);
-        Folder(problems, options.Working, "Working", null, required: false);
-        Folder(problems, options.Failed, "Failed", null, required: false);
-        if (problems.Count == 0)
+        if (run.UsesFolders)
         {
-            Distinct(problems, WorkerFolders.From(options));
-            if (!options.CreateFolders && !Directory.Exists(options.Inbox))
+            Folder(problems, options.Inbox, "Inbox", "--inbox DIR", required: true);
+            Folder(problems, options.Outbox, "Outbox", "--outbox DIR", required: true);
+            Folder(problems, options.Working, "Working", null, required: false);
+            Folder(problems, options.Failed, "Failed", null, required: false);
+            if (problems.Count == 0)
             {
-                problems.Add($"the inbox {Path.GetFullPath(options.Inbox!)} does not exist: check the path, or give --create-folders "
-                    + "(Worker:CreateFolders) to create it with the folders beside it");
+                Distinct(problems, WorkerFolders.From(options));
+                if (!options.CreateFolders && !Directory.Exists(options.Inbox))
+                {
+                    problems.Add($"the inbox {Path.GetFullPath(options.Inbox!)} does not exist: check the path, or give --create-folders "
+                        + "(Worker:CreateFolders) to create it with the folders beside it");
+                }
             }
         }
 

@@ -6,6 +6,9 @@ public sealed class WorkerRun
     /// <summary>Process what the inbox holds, then stop (for cron and tests).</summary>
     public bool Once { get; init; }
 
+    /// <summary>Jobs come from the inbox folder (false: from elsewhere, such as the database worker; the folders are then not required).</summary>
+    public bool UsesFolders { get; init; } = true;
+
     /// <summary>The worker stopped by itself (--once found the inbox empty), not on a stop request.</summary>
     public bool FinishedByItself { get; set; }
 

@@ -139,6 +139,7 @@ public static class QueueSchema
             vehicles           integer          NOT NULL,
             distance           double precision NOT NULL,
             feasible           boolean          NOT NULL,
+            has_plan           boolean          NOT NULL,
             seconds_to_best    double precision NOT NULL,
             seconds            double precision NOT NULL,
             reference          double precision,

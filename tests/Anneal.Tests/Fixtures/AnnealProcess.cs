@@ -108,6 +108,14 @@ internal sealed class AnnealProcess : IDisposable
     /// <summary>SIGTERM, as systemd sends on stop.</summary>
     public void Terminate() => Send("TERM");
 
+    /// <summary>SIGSTOP: the process freezes until <see cref="Continue"/>.</summary>
+    public void Freeze() => Send("STOP");
+
+    /// <summary>SIGCONT: a frozen process runs again.</summary>
+    public void Continue() => Send("CONT");
+
+    public bool HasExited => _process.HasExited;
+
     /// <summary>SIGINT, as Ctrl+C in a terminal.</summary>
     public void Interrupt() => Send("INT");
 

@@ -52,7 +52,7 @@ public sealed class PostgresCluster : IDisposable
     public string NewDatabase()
     {
         string name = "t" + Interlocked.Increment(ref _databases).ToString(CultureInfo.InvariantCulture);
-        using (var conn = new NpgsqlConnection(ConnectionString("postgres")))
+        using (var conn = new NpgsqlConnection(ConnectionString("postgres") + ";Pooling=false"))
         {
             conn.Open();
             using var create = new NpgsqlCommand($"CREATE DATABASE {name}", conn);

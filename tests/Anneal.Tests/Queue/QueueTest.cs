@@ -46,15 +46,18 @@ public abstract class QueueTest : TempFolderTest
 
     protected T Scalar<T>(string sql)
     {
-        using var conn = new NpgsqlConnection(Db);
+        using var conn = new NpgsqlConnection(Unpooled);
         conn.Open();
         using var cmd = new NpgsqlCommand(sql, conn);
         return (T)cmd.ExecuteScalar()!;
     }
 
+    /// <summary>The test's own queries open a fresh connection each time, so that a server restart leaves no broken one in a pool.</summary>
+    private string Unpooled => new NpgsqlConnectionStringBuilder(Db) { Pooling = false }.ConnectionString;
+
     protected void Execute(string sql)
     {
-        using var conn = new NpgsqlConnection(Db);
+        using var conn = new NpgsqlConnection(Unpooled);
         conn.Open();
         using var cmd = new NpgsqlCommand(sql, conn);
         cmd.ExecuteNonQuery();

@@ -39,8 +39,12 @@ public sealed class WorkerProcess : IDisposable
             environment["ANNEAL_Worker__" + key] = value;
         }
 
-        return new WorkerProcess(AnnealProcess.Start(root, new[] { "worker", "--inbox", "inbox", "--outbox", "outbox" }.Concat(args), environment));
+        return Launch(root, ["worker", "--inbox", "inbox", "--outbox", "outbox", .. args], environment);
     }
+
+    /// <summary>`anneal` with these arguments and extra environment variables, in <paramref name="root"/>.</summary>
+    public static WorkerProcess Launch(string root, IEnumerable<string> args, IReadOnlyDictionary<string, string> environment) =>
+        new(AnnealProcess.Start(root, args, environment));
 
     /// <summary>Waits for the exit; a generous deadline only, so a hung worker fails the test instead of hanging it.</summary>
     public int WaitForExit(double seconds = 30) => _process.WaitForExit(seconds);
@@ -50,6 +54,13 @@ public sealed class WorkerProcess : IDisposable
 
     /// <summary>SIGTERM, as systemd sends on stop.</summary>
     public void Terminate() => _process.Terminate();
+
+    /// <summary>SIGSTOP: the process freezes (a machine that hangs, a long pause) until <see cref="Continue"/>.</summary>
+    public void Freeze() => _process.Freeze();
+
+    public void Continue() => _process.Continue();
+
+    public bool HasExited => _process.HasExited;
 
     public void Dispose() => _process.Dispose();
 }

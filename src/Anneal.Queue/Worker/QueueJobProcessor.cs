@@ -1,0 +1,139 @@
+using Anneal.Core.Solving;
+using Anneal.Formats.Input;
+using Anneal.Jobs;
+using Anneal.Queue.Inputs;
+using Anneal.Queue.Jobs;
+using Anneal.Worker;
+using Microsoft.Extensions.Logging;
+
+namespace Anneal.Queue.Worker;
+
+/// <summary>
+/// Solves one claimed job through the job runner every host uses, writes its files with the host's artifact writers,
+/// and ends the claim in exactly one way: done, queued again, or failed. A database that stops answering does not
+/// lose the run: storing is retried with backoff until it answers (or the worker's stop deadline passes).
+/// </summary>
+public sealed class QueueJobProcessor(
+    WorkerOptions options, QueueOptions queue, Claims claims, ResultStore store, JobRunner runner, RunWriter writer, string workerId, ILogger log, TimeProvider clock)
+{
+    public async Task ProcessAsync(QueueJob job, CancellationToken stop)
+    {
+        string scratch = Directory.CreateTempSubdirectory($"anneal-job-{job.Id}-").FullName;
+        try
+        {
+            await SolveAsync(job, scratch, stop);
+        }
+        catch (Exception e) when (!Backoff.IsTransient(e))
+        {
+            // An unexpected fault: the job goes back with one more attempt counted, or fails once they are spent.
+            string reason = $"{e.GetType().Name}: {e.Message}";
+            bool spent = job.Attempt > options.MaxRetries;
+            QueueLog.JobError(log, job.Id, job.Attempt, reason, spent ? "given up (its retries are spent)" : "queued again");
+            await PersistAsync(job, ct => spent
+                ? store.FailAsync(job, $"Given up after {job.Attempt} attempts; the last one failed with: {reason}", ct)
+                : store.RetryAsync(job, reason, countAttempt: true, ct), stop);
+        }
+        finally
+        {
+            try
+            {
+                Directory.Delete(scratch, recursive: true);
+            }
+            catch (IOException)
+            {
+                // A temporary folder left behind is housekeeping, not correctness.
+            }
+        }
+    }
+
+    private async Task SolveAsync(QueueJob job, string scratch, CancellationToken stop)
+    {
+        JobPlan plan;
+        try
+        {
+            var (reached, files) = await PersistAsync(job, ct => claims.InputsAsync(job.Id, ct), stop);
+            if (!reached)
+            {
+                return;
+            }
+
+            var input = StoredInput.Load(InputKinds.Named(job.Kind), job.Name, files!, Path.Combine(scratch, "input"), string.Empty);
+            plan = runner.Prepare(input, Submitter.Request(job.Spec, options.TimeSeconds, options.ThreadsPerJob, options.Solvers));
+        }
+        catch (Exception e) when (e is InputException or UnknownSolverException)
+        {
+            var problems = e is InputException bad ? bad.Problems.Select(p => p.ToString()).ToList() : [e.Message];
+            QueueLog.JobInvalid(log, job.Id, problems.Count == 1 ? "1 problem" : $"{problems.Count} problems");
+            await PersistAsync(job, ct => store.FailAsync(job, $"The input cannot be read: {string.Join(Environment.NewLine, problems)}", ct), stop);
+            return;
+        }
+
+        if (stop.IsCancellationRequested)
+        {
+            await PersistAsync(job, ct => store.RetryAsync(job, null, countAttempt: false, ct), stop);
+            return;
+        }
+
+        QueueLog.JobStarted(log, job.Id, plan.Instance.StopCount, string.Join(",", plan.SolverNames), plan.Seconds);
+        var progress = new QueueProgress(job.Id, log, clock);
+        using var search = CancellationTokenSource.CreateLinkedTokenSource(stop);
+
+        // The lease is renewed for the whole claim: the search, then drawing the pictures and storing the result.
+        await using var heartbeat = new Heartbeat(claims, job, queue, progress, search.Cancel, log, clock);
+
+        // Solvers block their threads for the whole budget; a long-running task keeps them off the thread pool.
+        var run = await Task.Factory.StartNew(() => runner.Run(plan, progress.Report, search.Token), CancellationToken.None, TaskCreationOptions.LongRunning, TaskScheduler.Default);
+
+        bool requeue = run.Interrupted && stop.IsCancellationRequested && options.OnShutdown == ShutdownChoice.Requeue;
+        string folder = Directory.CreateDirectory(Path.Combine(scratch, "run")).FullName;
+        var now = clock.GetUtcNow();
+        writer.Write(folder, run, now);
+        new JobRecord(job.Id.ToString(System.Globalization.CultureInfo.InvariantCulture), job.Name, workerId, job.Attempt, job.ClaimedAt, now, run.Interrupted, Final: !requeue).Write(folder);
+        var result = ResultPackage.From(run, folder, job.Spec.ExperimentId is null ? null : plan.Seconds);
+
+        var (written, accepted) = await PersistAsync(job, ct => store.CompleteAsync(job, result, requeue ? ClaimEnd.Requeued : ClaimEnd.Done, ct), stop);
+        if (written && !accepted)
+        {
+            QueueLog.ResultRefused(log, job.Id, job.Claim);
+        }
+        else if (written)
+        {
+            string outcome = !run.Interrupted ? "solved" : requeue ? "interrupted (plan stored, job queued again)" : "interrupted (kept as its result)";
+            QueueLog.JobStored(log, job.Id, outcome, result.Solver, result.Objective, result.Feasible ? "feasible" : "infeasible", result.Vehicles, result.Seconds);
+        }
+    }
+
+    /// <summary>
+    /// Runs a database step until it succeeds, waiting with backoff while the database does not answer; once the worker
+    /// is stopping, only until its shutdown timeout is nearly used up. Reached is false when it gave up.
+    /// </summary>
+    private async Task<(bool Reached, T? Value)> PersistAsync<T>(QueueJob job, Func<CancellationToken, Task<T>> step, CancellationToken stop)
+    {
+        var backoff = new Backoff(queue.RetryMaxSeconds);
+        DateTimeOffset? deadline = null;
+        while (true)
+        {
+            try
+            {
+                // The step itself is never cancelled by the stop request: a result is worth storing while stopping.
+                return (true, await step(CancellationToken.None));
+            }
+            catch (Exception e) when (Backoff.IsTransient(e))
+            {
+                var wait = backoff.Fail();
+                if (stop.IsCancellationRequested)
+                {
+                    deadline ??= clock.GetUtcNow() + TimeSpan.FromSeconds(Math.Max(1, options.ShutdownTimeoutSeconds - 2));
+                    if (clock.GetUtcNow() + wait > deadline)
+                    {
+                        QueueLog.StoreAbandoned(log, job.Id);
+                        return (false, default);
+                    }
+                }
+
+                QueueLog.StoreRetry(log, job.Id, e.Message, wait.TotalSeconds);
+                await Task.Delay(wait, clock, CancellationToken.None);
+            }
+        }
+    }
+}
