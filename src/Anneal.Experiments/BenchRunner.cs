@@ -136,21 +136,33 @@ public static class BenchRunner
         }
 
         var (result, evaluation) = (judged.Result, judged.Evaluation);
+        string traceFile = TraceFile(run);
+        TraceCsvWriter.Write(Path.Combine(outDir, traceFile), TraceCsvWriter.Rows(run.Solver, result.Trace));
+        var measure = new RunMeasure(evaluation.Objective, evaluation.VehiclesUsed, evaluation.Distance, evaluation.Feasible, evaluation.Routes.Count > 0,
+            result.SecondsToBest, result.Seconds, result.LowerBound, result.BoundOnly);
+        return Row(run, measure, references, traceFile);
+    }
+
+    /// <summary>The results.csv row of a finished run, its gap to the reference value (if any) included.</summary>
+    /// <param name="traceFile">The run's trace, relative to the output folder (<see cref="TraceFile"/>).</param>
+    public static BenchRow Row(PlannedRun run, RunMeasure m, ReferenceValues references, string traceFile)
+    {
+        var instance = run.Instance;
         var reference = references.Find(instance);
-        double? gap = reference is null || evaluation.Routes.Count == 0 ? null : (evaluation.Distance / reference.Value - 1) * 100;
+        double? gap = reference is null || !m.HasPlan ? null : (m.Distance / reference.Value - 1) * 100;
         if (instance.Objective == Objective.Cost && reference is not null)
         {
-            gap = (evaluation.Objective / reference.Value - 1) * 100;
+            gap = (m.ObjectiveValue / reference.Value - 1) * 100;
         }
 
-        string traceName = string.Create(CultureInfo.InvariantCulture,
-            $"{Safe(instance.Name)}-{Safe(run.Solver)}-s{run.Seed}-{RunKey.BudgetText(run.BudgetSeconds)}s-{run.Objective}.csv");
-        TraceCsvWriter.Write(Path.Combine(outDir, TraceFolder, traceName),
-            TraceCsvWriter.Rows(run.Solver, result.Trace));
-        return new BenchRow(instance.Name, run.Solver, run.Seed, run.BudgetSeconds, run.Objective, evaluation.Objective,
-            evaluation.VehiclesUsed, evaluation.Distance, evaluation.Feasible, result.SecondsToBest, result.Seconds,
-            reference?.Value, reference?.Vehicles, result.BoundOnly ? null : gap, Path.Combine(TraceFolder, traceName), result.LowerBound, result.BoundOnly);
+        return new BenchRow(instance.Name, run.Solver, run.Seed, run.BudgetSeconds, run.Objective, m.ObjectiveValue,
+            m.Vehicles, m.Distance, m.Feasible, m.SecondsToBest, m.Seconds, reference?.Value, reference?.Vehicles, m.BoundOnly ? null : gap, traceFile,
+            m.LowerBound, m.BoundOnly);
     }
+
+    /// <summary>traces/&lt;instance&gt;-&lt;solver&gt;-s&lt;seed&gt;-&lt;budget&gt;s-&lt;objective&gt;.csv, relative to the output folder.</summary>
+    public static string TraceFile(PlannedRun run) => Path.Combine(TraceFolder, string.Create(CultureInfo.InvariantCulture,
+        $"{Safe(run.Instance.Name)}-{Safe(run.Solver)}-s{run.Seed}-{RunKey.BudgetText(run.BudgetSeconds)}s-{run.Objective}.csv"));
 
     private static string Safe(string name)
     {

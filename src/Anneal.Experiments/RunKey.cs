@@ -12,5 +12,8 @@ public readonly record struct RunKey(string Instance, string Solver, int Seed, s
 
     public static RunKey Of(PlannedRun run) => new(run.Instance.Name, run.Solver.ToLowerInvariant(), run.Seed, BudgetText(run.BudgetSeconds), run.Objective);
 
+    /// <summary>"instance/solver/s1/10s/distance": the key in one piece, for messages and the queue's job labels.</summary>
+    public string Label() => $"{Instance}/{Solver}/s{Seed.ToString(CultureInfo.InvariantCulture)}/{Budget}s/{Objective}";
+
     public static string BudgetText(double seconds) => seconds.ToString("0.######", CultureInfo.InvariantCulture);
 }

@@ -6,6 +6,8 @@ using Anneal.Experiments;
 using Anneal.Experiments.Summary;
 using Anneal.Formats.Input;
 using Anneal.Jobs;
+using Anneal.Queue.Bench;
+using Anneal.Queue.Jobs;
 using Anneal.Search.Diagnostics;
 using Microsoft.Extensions.DependencyInjection;
 
@@ -31,9 +33,11 @@ public static class BenchCommand
         var output = SharedOptions.Out("Output folder; running again into the same folder skips runs already in its results.csv. Default: runs/bench-<yyyyMMdd-HHmmss>.");
         var throughput = OptionValues.Seconds("--throughput-seconds", "Seconds spent measuring move evaluations per second on the largest instance (0 skips it).", 2, zero: true);
         var quiet = new Option<bool>("--quiet") { Description = "No line per finished run." };
+        var db = Queue.QueueAccess.DbOption();
+        db.Description = "Enqueue every run in the PostgreSQL queue at this Npgsql connection string, wait while `anneal worker --db` on any machines runs them, then write the usual outputs.";
         var command = new Command("bench", "Compare solvers: an experiment of instances × solvers × seeds × budgets; results.csv, statistics, pictures and a summary.");
         command.Arguments.Add(inputs);
-        foreach (Option option in new Option[] { experiment, solvers, seeds, time, iterations, objective, reference, jobs, output, throughput, quiet })
+        foreach (Option option in new Option[] { experiment, solvers, seeds, time, iterations, objective, reference, jobs, output, throughput, quiet, db })
         {
             command.Options.Add(option);
         }
@@ -90,12 +94,14 @@ public static class BenchCommand
             var refs = referencePath is { } rp ? ReferenceValues.Read(rp) : ReferenceValues.Empty;
             var loaded = InputDiscovery.Expand(paths).Select(InputLoader.Load).ToList();
             string folder = OutputFolder.Create((Given(output) ? parse.GetValue(output) : file.Out) ?? OutputFolder.Default(context.WorkingDirectory, "bench", context.Now()));
-            return Execute(loaded, settings, refs, referencePath, folder, parse.GetValue(throughput), parse.GetValue(quiet), context);
+            return Execute(loaded, settings, refs, referencePath, folder, parse.GetValue(throughput), parse.GetValue(quiet), context, parse.GetValue(db));
         });
         return command;
     }
 
-    public static int Execute(IReadOnlyList<LoadedInput> inputs, BenchSettings settings, ReferenceValues refs, string? referencePath, string folder, double throughputSeconds, bool quiet, CliContext context)
+    /// <param name="db">The queue's connection string: the runs are enqueued and run by database workers; null runs them here.</param>
+    public static int Execute(IReadOnlyList<LoadedInput> inputs, BenchSettings settings, ReferenceValues refs, string? referencePath, string folder, double throughputSeconds, bool quiet, CliContext context,
+        string? db = null)
     {
         var w = context.Out;
         var machine = MachineInfo.Current(settings.Jobs, new DateTimeOffset(context.Now()));
@@ -115,14 +121,34 @@ public static class BenchCommand
             w.WriteLine(Header);
         }
 
-        var outcome = BenchRunner.Run(context.Services.GetRequiredService<JobRunner>(), inputs, settings, refs, folder, row =>
+        void Finished(BenchRow row)
         {
             lines.Add(Format(row));
             if (!quiet)
             {
                 w.WriteLine(lines[^1]);
             }
-        }, null, stop.Token);
+        }
+
+        var runner = context.Services.GetRequiredService<JobRunner>();
+        BenchOutcome? outcome = null;
+        if (db is null)
+        {
+            outcome = BenchRunner.Run(runner, inputs, settings, refs, folder, Finished, null, stop.Token);
+        }
+        else
+        {
+            int code = Queue.QueueAccess.Run(context, db, checkSchema: true, async (source, _) =>
+            {
+                outcome = await new QueueBench(source, new Submitter(source, runner)).RunAsync(inputs, settings, refs, folder, Finished, context.Err.WriteLine, stop.Token);
+                return ExitCodes.Success;
+            });
+            if (outcome is null)
+            {
+                return code;
+            }
+        }
+
         if (outcome.Skipped > 0)
         {
             w.WriteLine($"Resumed: {outcome.Skipped} of {outcome.Plan.Count} planned runs were already in results.csv and were skipped.");
@@ -130,7 +156,13 @@ public static class BenchCommand
 
         if (stop.IsCancellationRequested)
         {
-            w.WriteLine($"Interrupted: {outcome.Finished} run(s) finished and recorded; {outcome.Dropped} in flight were dropped; {outcome.Missing} remain. Run the same command again to continue.");
+            w.WriteLine(db is null
+                ? $"Interrupted: {outcome.Finished} run(s) finished and recorded; {outcome.Dropped} in flight were dropped; {outcome.Missing} remain. Run the same command again to continue."
+                : $"Interrupted: {outcome.Finished} run(s) recorded; {outcome.Missing} remain in the queue, where workers go on with them. Run the same command again to collect them.");
+        }
+        else if (db is not null && outcome.Dropped > 0)
+        {
+            w.WriteLine($"{outcome.Dropped} run(s) failed or were cut short by a stopping worker and are not recorded; run the same command again to submit them anew.");
         }
 
         var stats = ExperimentReport.Write(folder, outcome, machine, referencePath);
@@ -156,7 +188,8 @@ public static class BenchCommand
             w.WriteLine($"{stats.WithoutReference.Count} instance(s) have no reference value: their gaps are to the best found across this experiment.");
         }
 
-        if (throughputSeconds > 0 && inputs.Count > 0 && !stop.IsCancellationRequested)
+        // The probe measures this machine; with --db the runs happened on the workers' machines, so it would mislead.
+        if (throughputSeconds > 0 && inputs.Count > 0 && !stop.IsCancellationRequested && db is null)
         {
             var largest = inputs.MaxBy(i => i.Instance.StopCount)!.Instance;
             double rate = ThroughputProbe.EvaluationsPerSecond(largest, throughputSeconds);

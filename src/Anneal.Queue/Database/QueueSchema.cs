@@ -10,7 +10,7 @@ namespace Anneal.Queue.Database;
 public static class QueueSchema
 {
     /// <summary>The version this build reads and writes. A migration adds a step to <see cref="Steps"/> and raises it.</summary>
-    public const int Version = 1;
+    public const int Version = 2;
 
     /// <summary>Any constant: the advisory lock that serialises concurrent inits.</summary>
     private const long InitLock = 0x616E6E65616C;
@@ -139,7 +139,6 @@ public static class QueueSchema
             vehicles           integer          NOT NULL,
             distance           double precision NOT NULL,
             feasible           boolean          NOT NULL,
-            has_plan           boolean          NOT NULL,
             seconds_to_best    double precision NOT NULL,
             seconds            double precision NOT NULL,
             reference          double precision,
@@ -148,11 +147,23 @@ public static class QueueSchema
         );
         CREATE INDEX bench_results_experiment ON bench_results (experiment_id);
         """,
+        """
+        -- A run of a benchmark is known by its key (instance, solver, seed, budget, objective), so that an interrupted
+        -- `anneal bench --db` collects the jobs it already submitted instead of submitting them again.
+        ALTER TABLE jobs ADD COLUMN label text;
+        CREATE INDEX jobs_experiment ON jobs (experiment_id, label) WHERE experiment_id IS NOT NULL;
+
+        -- Whether the run produced a plan at all (a gap is only measured for one that did), and a proven lower bound.
+        ALTER TABLE bench_results ADD COLUMN has_plan boolean NOT NULL DEFAULT true,
+                                  ADD COLUMN lower_bound double precision,
+                                  ADD COLUMN bound_only boolean NOT NULL DEFAULT false;
+        """,
     ];
 
     /// <summary>Creates or migrates the schema to <see cref="Version"/>; returns the version found before (0 for an empty database).</summary>
+    /// <param name="upTo">The version to stop at; lower than <see cref="Version"/> only to test migrations.</param>
     /// <exception cref="QueueException">when the database is at a newer version than this build knows.</exception>
-    public static async Task<int> InitAsync(NpgsqlDataSource db, CancellationToken cancel)
+    public static async Task<int> InitAsync(NpgsqlDataSource db, CancellationToken cancel, int upTo = Version)
     {
         await using var conn = await db.OpenConnectionAsync(cancel);
         await using var tx = await conn.BeginTransactionAsync(cancel);
@@ -168,16 +179,16 @@ public static class QueueSchema
             throw QueueException.NewerSchema(found);
         }
 
-        for (int v = found + 1; v <= Version; v++)
+        for (int v = found + 1; v <= upTo; v++)
         {
             await using var step = new NpgsqlCommand(Steps[v - 1], conn, tx);
             await step.ExecuteNonQueryAsync(cancel);
         }
 
-        if (found < Version)
+        if (found < upTo)
         {
             await using var stamp = new NpgsqlCommand("DELETE FROM anneal_schema; INSERT INTO anneal_schema (version) VALUES (@v)", conn, tx);
-            stamp.Parameters.AddWithValue("v", Version);
+            stamp.Parameters.AddWithValue("v", upTo);
             await stamp.ExecuteNonQueryAsync(cancel);
         }
 

@@ -20,4 +20,7 @@ public sealed record JobSpec
 
     /// <summary>The `anneal bench --db` experiment the job is a run of, if any.</summary>
     public long? ExperimentId { get; init; }
+
+    /// <summary>Which run of the experiment it is (its run key), so that a resumed benchmark finds it again.</summary>
+    public string? Label { get; init; }
 }

@@ -51,8 +51,8 @@ public sealed class Submitter(NpgsqlDataSource db, JobRunner runner)
         {
             await using var insert = new NpgsqlCommand(
                 """
-                INSERT INTO jobs (name, kind, priority, solvers, time_seconds, iterations, objective, seed, experiment_id, submitted_by)
-                VALUES (@name, @kind, @priority, @solvers, @time, @iterations, @objective, @seed, @experiment, @by)
+                INSERT INTO jobs (name, kind, priority, solvers, time_seconds, iterations, objective, seed, experiment_id, label, submitted_by)
+                VALUES (@name, @kind, @priority, @solvers, @time, @iterations, @objective, @seed, @experiment, @label, @by)
                 RETURNING id
                 """, conn, tx);
             var s = job.Spec;
@@ -65,6 +65,7 @@ public sealed class Submitter(NpgsqlDataSource db, JobRunner runner)
             insert.Parameters.Add(Nullable("objective", NpgsqlDbType.Text, s.Objective?.ToText()));
             insert.Parameters.Add(Nullable("seed", NpgsqlDbType.Integer, s.Seed));
             insert.Parameters.Add(Nullable("experiment", NpgsqlDbType.Bigint, s.ExperimentId));
+            insert.Parameters.Add(Nullable("label", NpgsqlDbType.Text, s.Label));
             insert.Parameters.AddWithValue("by", by);
             long id = (long)(await insert.ExecuteScalarAsync(cancel))!;
             ids.Add(id);

@@ -57,7 +57,7 @@ public sealed record ResultPackage(
         {
             var only = run.Outcome.Results[0];
             bench = new BenchRun(only.Result.Solver, run.Plan.Seed, budget, only.Evaluation.Objective, only.Evaluation.VehiclesUsed, only.Evaluation.Distance,
-                only.Evaluation.Feasible, only.Evaluation.Routes.Count > 0, only.Result.SecondsToBest, only.Result.Seconds);
+                only.Evaluation.Feasible, only.Evaluation.Routes.Count > 0, only.Result.SecondsToBest, only.Result.Seconds, only.Result.LowerBound, only.Result.BoundOnly);
         }
 
         return new ResultPackage(instance.Name, best.Result.Solver, instance.Objective.ToText(), plan.Objective, plan.Distance, plan.Duration, plan.VehiclesUsed,
@@ -81,4 +81,6 @@ public sealed record ResultPackage(
 public sealed record PlanRow(string Vehicle, int Sequence, string Stop, double Arrival, double Start, double Departure, double Wait, double Late);
 
 /// <summary>A benchmark run's measures (one solver), stored in bench_results beside the job's result.</summary>
-public sealed record BenchRun(string Solver, int Seed, double BudgetSeconds, double ObjectiveValue, int Vehicles, double Distance, bool Feasible, bool HasRoutes, double SecondsToBest, double Seconds);
+public sealed record BenchRun(
+    string Solver, int Seed, double BudgetSeconds, double ObjectiveValue, int Vehicles, double Distance, bool Feasible, bool HasRoutes, double SecondsToBest, double Seconds,
+    double? LowerBound, bool BoundOnly);

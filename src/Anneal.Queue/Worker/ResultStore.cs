@@ -200,8 +200,9 @@ public sealed class ResultStore(NpgsqlDataSource db, string workerId)
         await using var cmd = new NpgsqlCommand(
             """
             INSERT INTO bench_results (job_id, experiment_id, instance, solver, seed, budget_s, objective, objective_value, vehicles, distance, feasible,
-                                       has_plan, seconds_to_best, seconds)
-            VALUES (@id, @experiment, @instance, @solver, @seed, @budget, @objective, @value, @vehicles, @distance, @feasible, @plan, @best, @seconds)
+                                       has_plan, seconds_to_best, seconds, lower_bound, bound_only)
+            VALUES (@id, @experiment, @instance, @solver, @seed, @budget, @objective, @value, @vehicles, @distance, @feasible, @plan, @best, @seconds,
+                    @bound, @boundOnly)
             """, conn, tx);
         var p = cmd.Parameters;
         p.AddWithValue("id", id);
@@ -218,6 +219,8 @@ public sealed class ResultStore(NpgsqlDataSource db, string workerId)
         p.AddWithValue("plan", b.HasRoutes);
         p.AddWithValue("best", b.SecondsToBest);
         p.AddWithValue("seconds", b.Seconds);
+        p.Add(Submitter.Nullable("bound", NpgsqlTypes.NpgsqlDbType.Double, b.LowerBound is { } bound && double.IsFinite(bound) ? bound : null));
+        p.AddWithValue("boundOnly", b.BoundOnly);
         await cmd.ExecuteNonQueryAsync(cancel);
     }
 }

@@ -1,6 +1,7 @@
 using System.IO.Compression;
 using Anneal.Cli;
 using Anneal.Cli.Commands;
+using Anneal.Queue.Database;
 using Anneal.Tests.Fixtures;
 using Anneal.Tests.Worker;
 
@@ -21,18 +22,38 @@ public sealed class QueueCommandTests(PostgresCluster cluster) : QueueTest(clust
 
         var first = Anneal("queue", "init", "--db", Db);
         Assert.True(first.Code == 0, first.Err);
-        Assert.Contains("Created the queue schema, version 1", first.Out, StringComparison.Ordinal);
+        Assert.Contains($"Created the queue schema, version {QueueSchema.Version}", first.Out, StringComparison.Ordinal);
         var again = Anneal("queue", "init", "--db", Db);
         Assert.True(again.Code == 0, again.Err);
         Assert.Contains("nothing to do", again.Out, StringComparison.Ordinal);
         Assert.Equal(1L, Scalar<long>("SELECT count(*) FROM anneal_schema"));
-        Assert.Equal(1, Scalar<int>("SELECT version FROM anneal_schema"));
+        Assert.Equal(QueueSchema.Version, Scalar<int>("SELECT version FROM anneal_schema"));
 
         Execute("UPDATE anneal_schema SET version = 99");
         var newer = Anneal("queue", "status", "--db", Db);
         Assert.Equal(ExitCodes.QueueUnavailable, newer.Code);
         Assert.Contains("version 99, newer than", newer.Err, StringComparison.Ordinal);
         Assert.Equal(ExitCodes.QueueUnavailable, Anneal("queue", "init", "--db", Db).Code);
+    }
+
+    [SkippableFact]
+    public async Task A_database_at_the_first_version_is_refused_until_init_migrates_it_keeping_its_jobs()
+    {
+        await using (var db = QueueConnection.Open(Db))
+        {
+            await QueueSchema.InitAsync(db, CancellationToken.None, upTo: 1);
+        }
+
+        Execute("INSERT INTO jobs (name, kind) VALUES ('north', 'folder')");
+        var old = Anneal("queue", "status", "--db", Db);
+        Assert.Equal(ExitCodes.QueueUnavailable, old.Code);
+        Assert.Contains("version 1, older than", old.Err, StringComparison.Ordinal);
+
+        var migrated = Anneal("queue", "init", "--db", Db);
+        Assert.True(migrated.Code == 0, migrated.Err);
+        Assert.Contains($"Migrated the queue schema from version 1 to {QueueSchema.Version}", migrated.Out, StringComparison.Ordinal);
+        Assert.Equal(1, Status().GetProperty("queued").GetInt32());
+        Assert.Equal(1L, Scalar<long>("SELECT count(*) FROM jobs WHERE name = 'north' AND label IS NULL"));
     }
 
     [SkippableFact]
