@@ -37,7 +37,7 @@ public static class RunReport
         if (evaluation.VehiclesUsed > 0)
         {
             using var chart = ScheduleChart.Create(instance, evaluation);
-            schedule = PlotFile.Save(chart, folder, ScheduleChart.FileStem, ScheduleChart.SizeFor(ScheduleChart.Rows(evaluation)));
+            schedule = PlotFile.Save(chart, folder, ScheduleChart.FileStem, ScheduleChart.SizeFor(evaluation));
         }
 
         var input = new ReportInput(instance, evaluation, record, solvers, new ReportPictures(convergence, routes, schedule));

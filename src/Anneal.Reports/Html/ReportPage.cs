@@ -48,8 +48,8 @@ public static class ReportPage
         ProblemLists.Screening(h, input);
 
         h.Append("<h2>Maps and schedule</h2>");
-        Picture(h, input.Pictures.Routes, "Routes in visiting order; black squares are depots, red rings late stops, crosses unserved stops.");
-        Picture(h, input.Pictures.Schedule, "Each vehicle's day: driving, waiting and service; thin lines above are the stops' time windows; red is lateness or overtime.");
+        Picture(h, input.Pictures.Routes, "Routes in visiting order, drawn to scale; black squares are depots, red rings late stops, crosses unserved stops.");
+        Picture(h, input.Pictures.Schedule, "Each vehicle's day: driving, waiting and service on its first row, then a row per stop with its time windows beside that visit's waiting and service; red is lateness or overtime.");
 
         h.Append("<h2>Cautions</h2>");
         ProblemLists.Cautions(h);

@@ -33,6 +33,7 @@ internal static class ReportStyles
         figcaption { color: var(--muted); font-size: 13px; }
         ul.plain { padding-left: 20px; }
         .sheet { border: 1px solid var(--line); border-radius: 8px; padding: 12px 14px; margin: 14px 0; }
+        .swatch { display: inline-block; width: 14px; height: 14px; border-radius: 3px; margin-right: 8px; vertical-align: -1px; }
         .sheet .sum { color: var(--muted); margin: 0 0 6px; }
         .none { color: var(--muted); font-style: italic; }
         @page { size: A4; margin: 14mm; }
@@ -42,7 +43,7 @@ internal static class ReportStyles
           figure { break-inside: avoid; }
           h2 { break-after: avoid; }
           tr { break-inside: avoid; }
-          .advice, .card { -webkit-print-color-adjust: exact; print-color-adjust: exact; }
+          .advice, .card, .swatch { -webkit-print-color-adjust: exact; print-color-adjust: exact; }
         }
         """;
 }

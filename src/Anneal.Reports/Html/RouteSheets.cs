@@ -12,7 +12,7 @@ internal static class RouteSheets
     public static void Write(StringBuilder h, ReportInput input)
     {
         var instance = input.Instance;
-        bool any = false;
+        int used = 0;
         foreach (var route in input.Plan.Routes)
         {
             if (route.Stops.Length == 0)
@@ -20,22 +20,23 @@ internal static class RouteSheets
                 continue;
             }
 
-            any = true;
-            Sheet(h, input, instance, route);
+            Sheet(h, input, instance, route, RouteColours.Of(used));
+            used++;
         }
 
-        if (!any)
+        if (used == 0)
         {
             h.Append("<p class=\"none\">No vehicle leaves the depot in this plan.</p>");
         }
     }
 
-    private static void Sheet(StringBuilder h, ReportInput input, Instance instance, RouteEvaluation route)
+    private static void Sheet(StringBuilder h, ReportInput input, Instance instance, RouteEvaluation route, string colour)
     {
         var v = instance.Vehicles[route.Vehicle];
         var m = route.Metrics;
         string unit = instance.Units.TimeWords;
-        h.Append("<section class=\"sheet\" data-vehicle=\"").Append(E(v.Id)).Append("\"><h3>Vehicle ").Append(E(v.Id)).Append("</h3>")
+        h.Append("<section class=\"sheet\" data-vehicle=\"").Append(E(v.Id)).Append("\"><h3><span class=\"swatch\" style=\"background:").Append(colour)
+            .Append("\" title=\"its colour on the map\"></span>Vehicle ").Append(E(v.Id)).Append("</h3>")
             .Append("<p class=\"sum\">").Append(route.Stops.Length).Append(" stops · leaves ").Append(E(instance.Depots[v.StartDepot].Id))
             .Append(" at ").Append(instance.Units.Format(m.Departure)).Append(" · back at ").Append(E(instance.Depots[v.EndDepot].Id))
             .Append(' ').Append(instance.Units.Format(m.Return)).Append(" · ").Append(Num(m.Distance, "0.0")).Append(E(instance.Units.DistanceSuffix))

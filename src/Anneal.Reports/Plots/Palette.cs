@@ -1,3 +1,4 @@
+using Anneal.Formats.Output;
 using ScottPlot;
 
 namespace Anneal.Reports.Plots;
@@ -5,8 +6,8 @@ namespace Anneal.Reports.Plots;
 /// <summary>The colours every picture shares, so a solver or a state looks the same in each.</summary>
 public static class Palette
 {
-    // Twenty distinguishable hues (the Category20 scheme of d3, as shipped with ScottPlot).
-    private static readonly Color[] Routes = new ScottPlot.Palettes.Category20().Colors;
+    // The route hues shared with routes.geojson and the report (no red: red is lateness).
+    private static readonly Color[] Routes = RouteColours.Hex.Select(Color.FromHex).ToArray();
     private static readonly Color[] Solvers = new ScottPlot.Palettes.Category10().Colors;
 
     public static Color Late { get; } = Color.FromHex("#d62728");
@@ -19,6 +20,14 @@ public static class Palette
     public static Color Bound { get; } = Color.FromHex("#6a3d9a");
 
     public static Color Route(int k) => Routes[k % Routes.Length];
+
+    /// <summary>Solid for the first round of hues, then dashed and dotted, so route 13 is not taken for route 1.</summary>
+    public static LinePattern RoutePattern(int k) => (k / Routes.Length % 3) switch
+    {
+        0 => LinePattern.Solid,
+        1 => LinePattern.Dashed,
+        _ => LinePattern.Dotted,
+    };
 
     public static Color Solver(int k) => Solvers[k % Solvers.Length];
 }

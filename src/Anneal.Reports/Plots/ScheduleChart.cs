@@ -1,15 +1,16 @@
 using Anneal.Core.Evaluation;
 using Anneal.Core.Model;
-using Anneal.Formats.Output;
 using ScottPlot;
 using ScottPlot.TickGenerators;
 
 namespace Anneal.Reports.Plots;
 
 /// <summary>
-/// The day of each vehicle used, one row each: its shift as a pale band; driving, waiting and service as bars;
-/// above them the windows of its stops (alternating on two thin lanes so neighbours stay apart); lateness and
-/// overtime in red.
+/// The day of each vehicle used, one band each, tinted in the vehicle's route colour from the map: its shift as the
+/// band, and on its top row driving, waiting and service as bars. Under that row every stop has a row of its own, in
+/// visiting order and labelled with its stop id: the stop's windows as a thin line with end marks, and on the same
+/// line the waiting and service of the visit, level with the bars above, so each window sits beside its own visit.
+/// Lateness and overtime are red.
 /// </summary>
 public static class ScheduleChart
 {
@@ -17,21 +18,41 @@ public static class ScheduleChart
     public const int Width = 1000;
 
     private const double BarSize = 0.5;
+    private const double VehicleRow = 1.0;
+    private const double StopRow = 0.42;
+    private const double PixelsPerUnit = 38;
+    private const int LabelledStops = 300;
     private const double Tolerance = CostModel.FeasibilityTolerance;
 
-    /// <summary>Picture size for this many rows: taller with more vehicles, within readable bounds.</summary>
-    public static PixelSize SizeFor(int rows) => new(Width, Math.Clamp(140 + (34 * rows), 420, 3000));
+    /// <summary>Picture size for a plan: taller with more vehicles and stops, within readable bounds.</summary>
+    public static PixelSize SizeFor(PlanEvaluation evaluation) =>
+        new(Width, Math.Clamp(150 + (int)(PixelsPerUnit * Height(evaluation)), 420, 4000));
 
-    public static int Rows(PlanEvaluation evaluation) => evaluation.VehiclesUsed;
+    /// <summary>Height of all bands in plot units.</summary>
+    private static double Height(PlanEvaluation evaluation)
+    {
+        double height = 0;
+        foreach (var route in evaluation.Routes)
+        {
+            if (route.Stops.Length > 0)
+            {
+                height += VehicleRow + (StopRow * route.Stops.Length);
+            }
+        }
+
+        return height;
+    }
 
     public static Plot Create(Instance instance, PlanEvaluation evaluation)
     {
         var plot = new Plot();
-        plot.Title("Schedule per vehicle");
+        plot.Title("Schedule per vehicle, each stop on its own row under its vehicle");
         var bars = new List<Bar>();
         var ticks = new NumericManual();
+        bool labelStops = instance.StopCount <= LabelledStops;
         double from = double.PositiveInfinity, to = double.NegativeInfinity;
-        int row = 0;
+        double top = 0;
+        int used = 0;
         foreach (var route in evaluation.Routes)
         {
             if (route.Stops.Length == 0)
@@ -40,39 +61,43 @@ public static class ScheduleChart
             }
 
             var v = instance.Vehicles[route.Vehicle];
-            double y = -row;
-            ticks.AddMajor(y, v.Id);
             var m = route.Metrics;
+            double height = VehicleRow + (StopRow * route.Stops.Length);
+            double y = top - (VehicleRow / 2);
+            ticks.AddMajor(y, v.Id);
             double shiftEnd = double.IsFinite(v.ShiftEnd) ? v.ShiftEnd : m.Return;
-            bars.Add(Span(y, v.ShiftStart, shiftEnd, 0.8, Colors.LightGray.WithAlpha(0.45)));
+            bars.Add(Span(top - (height / 2), v.ShiftStart, shiftEnd, height - 0.12, Palette.Route(used).WithAlpha(0.16)));
             from = Math.Min(from, Math.Min(v.ShiftStart, m.Departure));
             to = Math.Max(to, Math.Max(shiftEnd, m.Return));
-            AddRoute(instance, route, y, bars, Math.Max(1e-9, (m.Return - v.ShiftStart) * 0.003));
+            AddRoute(instance, route, y, bars, ticks, labelStops, Math.Max(1e-9, (m.Return - v.ShiftStart) * 0.003));
             if (m.Overtime > Tolerance && double.IsFinite(v.ShiftEnd))
             {
                 bars.Add(Span(y - 0.33, v.ShiftEnd, m.Return, 0.12, Palette.Late));
             }
 
-            row++;
+            top -= height;
+            used++;
         }
 
         var plottable = plot.Add.Bars(bars);
         plottable.Horizontal = true;
         plot.Axes.Left.TickGenerator = ticks;
+        plot.Axes.Left.TickLabelStyle.FontSize = 11;
         if (double.IsFinite(from) && double.IsFinite(to))
         {
             plot.Axes.SetLimitsX(from - ((to - from) * 0.02), to + ((to - from) * 0.02));
             plot.Axes.Bottom.TickGenerator = ClockTicks.For(instance, from, to);
         }
 
-        plot.Axes.SetLimitsY(-row + 0.45, 0.6);
+        plot.Axes.SetLimitsY(top - 0.05, 0.05);
         plot.XLabel(instance.Units.Clock ? "time of day" : "time");
         Legend(plot);
         return plot;
     }
 
+    /// <param name="y">Centre of the vehicle's bar row; the stops' rows follow below it.</param>
     /// <param name="tick">Width of a window's end marks, in time units.</param>
-    private static void AddRoute(Instance instance, RouteEvaluation route, double y, List<Bar> bars, double tick)
+    private static void AddRoute(Instance instance, RouteEvaluation route, double y, List<Bar> bars, NumericManual ticks, bool label, double tick)
     {
         double t = route.Metrics.Departure;
         for (int k = 0; k < route.Stops.Length; k++)
@@ -80,32 +105,45 @@ public static class ScheduleChart
             var visit = route.Visits[k];
             var stop = instance.Stops[route.Stops[k]];
             bars.Add(Span(y, t, visit.Arrival, BarSize, Palette.Driving));
-            if (visit.Start > visit.Arrival + Tolerance)
+            Visit(bars, y, visit, BarSize);
+
+            double lane = y - (VehicleRow / 2) - (StopRow * (k + 0.5));
+            if (label)
             {
-                bars.Add(Span(y, visit.Arrival, visit.Start, BarSize, Palette.Waiting));
+                ticks.AddMajor(lane, $"{k + 1}  {stop.Id}");
             }
 
-            bars.Add(Span(y, visit.Start, visit.Departure, BarSize, Palette.Service));
-            if (visit.Late > Tolerance)
+            foreach (var w in stop.Windows)
             {
-                // From the window's close to the arrival: how late the truck is (or the time warp a hard window needs).
-                bars.Add(Span(y, visit.Arrival - visit.Late, visit.Arrival, BarSize * 0.45, Palette.Late));
+                if (double.IsFinite(w.Open) && double.IsFinite(w.Close))
+                {
+                    bars.Add(Span(lane, w.Open, w.Close, 0.05, Palette.Window));
+                    bars.Add(Span(lane, w.Open, w.Open + tick, 0.24, Palette.Window));
+                    bars.Add(Span(lane, w.Close - tick, w.Close, 0.24, Palette.Window));
+                }
             }
 
-            // The window served in, with end marks so that neighbouring windows stay apart; three lanes in turn.
-            var w = RoutesCsvWriter.WindowUsed(stop, visit.Arrival);
-            if (double.IsFinite(w.Open) && double.IsFinite(w.Close))
-            {
-                double lane = y + 0.3 + (0.07 * (k % 3));
-                bars.Add(Span(lane, w.Open, w.Close, 0.02, Palette.Window.WithAlpha(0.7)));
-                bars.Add(Span(lane, w.Open, w.Open + tick, 0.07, Palette.Window));
-                bars.Add(Span(lane, w.Close - tick, w.Close, 0.07, Palette.Window));
-            }
-
+            Visit(bars, lane, visit, 0.2);
             t = visit.Departure;
         }
 
         bars.Add(Span(y, t, route.Metrics.Return, BarSize, Palette.Driving));
+    }
+
+    /// <summary>Waiting, service and lateness of one visit at this height.</summary>
+    private static void Visit(List<Bar> bars, double y, VisitTimes visit, double size)
+    {
+        if (visit.Start > visit.Arrival + Tolerance)
+        {
+            bars.Add(Span(y, visit.Arrival, visit.Start, size, Palette.Waiting));
+        }
+
+        bars.Add(Span(y, visit.Start, visit.Departure, size, Palette.Service));
+        if (visit.Late > Tolerance)
+        {
+            // From the window's close to the arrival: how late the truck is (or the time warp a hard window needs).
+            bars.Add(Span(y, visit.Arrival - visit.Late, visit.Arrival, size * 0.45, Palette.Late));
+        }
     }
 
     private static Bar Span(double y, double from, double to, double size, Color color) => new()
@@ -123,7 +161,7 @@ public static class ScheduleChart
     {
         foreach (var (label, color) in new[]
         {
-            ("shift", Colors.LightGray), ("driving", Palette.Driving), ("waiting", Palette.Waiting), ("service", Palette.Service),
+            ("shift (tinted as on the map)", Colors.LightGray), ("driving", Palette.Driving), ("waiting", Palette.Waiting), ("service", Palette.Service),
             ("time window", Palette.Window), ("late / overtime", Palette.Late),
         })
         {

@@ -16,7 +16,7 @@ public sealed class PlotTests
         Assert.True(plan.VehiclesUsed > 0);
 
         PngCheck.Valid(PlotFile.Png(RouteMap.Create(instance, plan), RouteMap.Size), 1000, 800);
-        var size = ScheduleChart.SizeFor(plan.VehiclesUsed);
+        var size = ScheduleChart.SizeFor(plan);
         PngCheck.Valid(PlotFile.Png(ScheduleChart.Create(instance, plan), size), (int)size.Width, (int)size.Height);
         PngCheck.Valid(PlotFile.Png(ConvergencePlot.Create(ReportFixtures.Solvers(plan.Objective)), ConvergencePlot.Size), 1000, 560);
     }

@@ -22,6 +22,13 @@ internal static class ReportFixtures
         return (instance, PlanEvaluator.Evaluate(instance, Chunks(instance, (instance.StopCount + instance.Vehicles.Count - 1) / instance.Vehicles.Count)));
     }
 
+    /// <summary>The lat/lon demo (one window per stop) with its stops split in order over its three vans.</summary>
+    public static (Instance Instance, PlanEvaluation Plan) MerrowdalePlan()
+    {
+        var instance = InputLoader.Load(Path.Combine(BenchmarkData.RepoRoot, "instances", "merrowdale")).Instance;
+        return (instance, PlanEvaluator.Evaluate(instance, Chunks(instance, (instance.StopCount + instance.Vehicles.Count - 1) / instance.Vehicles.Count)));
+    }
+
     /// <summary>1,000 stops in a 60 × 60 km square, minute windows, 100 vans; routes by angle around the depot, ten stops each.</summary>
     public static (Instance Instance, PlanEvaluation Plan) Large()
     {
