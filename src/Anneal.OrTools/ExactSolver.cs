@@ -53,7 +53,7 @@ public sealed class ExactSolver : ISolver
 
         // The best known plan, Anneal's construction, as a hint: CP-SAT starts from it, and it is the answer
         // should CP-SAT find nothing better in time.
-        if (_start?.Build(instance, cancel) is { } plan && keeper.Offer(plan, "construction (hint)") is { Feasible: true })
+        if (_start?.Build(instance, cancel) is { } plan && keeper.Offer(plan, Keeper.HintState) is { Feasible: true })
         {
             exact.Hint(plan);
             CompleteHint(exact, options.TimeLimit - clock.Elapsed, cancel);
@@ -94,23 +94,27 @@ public sealed class ExactSolver : ISolver
                     : "not proven optimal, and no lower bound proved");
                 break;
             case CpSolverStatus.Infeasible:
-                result = SolverStatus.NoSolution;
+                // The integer model (rounded times and costs) can be stricter than the evaluator: the hint may
+                // still keep every rule. Then the search ended by itself with a plan that is not CP-SAT's.
+                result = keeper.Best is null ? SolverStatus.NoSolution : SolverStatus.Completed;
                 notes = ["CP-SAT proved that its integer model has no plan that keeps every hard rule"];
-                if (keeper.Best is not null)
-                {
-                    notes.Add("its hint, Anneal's construction, is returned as its plan");
-                }
-
                 break;
             default:
                 result = cancel.IsCancellationRequested ? SolverStatus.Interrupted : keeper.Best is null ? SolverStatus.NoSolution : SolverStatus.TimeLimit;
                 if (keeper.Best is not null)
                 {
                     lowerBound = hints?.ObjectiveAtLeast;
-                    notes.Add("CP-SAT found no plan of its own in time; its hint, Anneal's construction, is returned");
                 }
 
                 break;
+        }
+
+        if (keeper.BestIsHint)
+        {
+            // Said first, in every case: the plan shown is Anneal's construction, not a plan CP-SAT found.
+            notes.Insert(0, status is CpSolverStatus.Optimal or CpSolverStatus.Feasible
+                ? "its plan is Anneal's construction, the hint it was given: CP-SAT found none better"
+                : "its plan is Anneal's construction, the hint it was given: CP-SAT found no plan of its own");
         }
 
         if (keeper.Best is null && status != CpSolverStatus.Infeasible)
@@ -164,9 +168,14 @@ public sealed class ExactSolver : ISolver
     /// <summary>Judges every CP-SAT solution with Anneal's evaluator and traces the improvements.</summary>
     private sealed class Keeper(Instance instance, ExactModel exact, TraceRecorder trace, Stopwatch clock) : CpSolverSolutionCallback
     {
+        public const string HintState = "construction (hint)";
+
         public PlanEvaluation? Best { get; private set; }
         public Plan BestPlan { get; private set; } = Plan.Empty;
         public long Solutions { get; private set; }
+
+        /// <summary>The best plan is still the hinted construction: CP-SAT found none better of its own.</summary>
+        public bool BestIsHint { get; private set; }
 
         public override void OnSolutionCallback()
         {
@@ -182,6 +191,7 @@ public sealed class ExactSolver : ISolver
             {
                 Best = judged;
                 BestPlan = plan;
+                BestIsHint = state == HintState;
                 trace.Improved(new TracePoint(clock.Elapsed.TotalSeconds, Solutions, judged.Objective, judged.Objective, judged.Feasible, state));
             }
 

@@ -54,6 +54,26 @@ public sealed class WarmStartTests
         Assert.True(result.LowerBound <= judged.Objective + 1e-6);
     }
 
+    [Fact]
+    public void Exact_says_when_its_plan_is_the_construction_it_was_hinted_with()
+    {
+        // One stop, one vehicle: the construction is the only plan, so CP-SAT can find none better and the plan it
+        // returns is its hint. The first note must say so; without a hint the plan is CP-SAT's own and no note does.
+        var instance = TinyInstances.Line([TinyInstances.Stop("a", 5)], [TinyInstances.Vehicle("v")], RuleSet.AllHard);
+        var options = new SolveOptions { TimeLimit = TimeSpan.FromSeconds(10) }; // a ceiling: the proof takes milliseconds
+        const string said = "its plan is Anneal's construction, the hint it was given";
+
+        var hinted = new ExactSolver(new ExactSettings { Workers = 1 }, new InsertionStart()).Solve(instance, options, null, default);
+        var own = new ExactSolver(new ExactSettings { Workers = 1 }).Solve(instance, options, null, default);
+
+        Assert.Equal(SolverStatus.Optimal, hinted.Status);
+        Assert.StartsWith(said, (hinted.Notes ?? [])[0], StringComparison.Ordinal);
+        Assert.Equal("construction (hint)", hinted.Trace[0].State);
+        Assert.Equal(SolverStatus.Optimal, own.Status);
+        Assert.DoesNotContain(own.Notes ?? [], n => n.StartsWith(said, StringComparison.Ordinal));
+        Assert.Equal(PlanEvaluator.Evaluate(instance, own.Plan).Objective, PlanEvaluator.Evaluate(instance, hinted.Plan).Objective, 9);
+    }
+
     private static PlanEvaluation Construction(Instance instance)
     {
         var state = InsertionSolver.Build(instance, new CandidateLists(instance, 30));

@@ -1,4 +1,5 @@
 using System.Text.Json;
+using Anneal.Cli;
 using Anneal.Core.Evaluation;
 using Anneal.Core.Plans;
 using Anneal.Formats.Input;
@@ -13,7 +14,7 @@ namespace Anneal.Tests.Formats.Output;
 /// routes.geojson read back by a general-purpose GeoJSON reader (NetTopologySuite.IO.GeoJSON4STJ), its positions
 /// checked against the input's lat/lon (RFC 7946 section 3.1.1: [longitude, latitude]).
 /// </summary>
-public sealed class RoutesGeoJsonTests : TempFolderTest
+public sealed class RoutesGeoJsonTests : CommandTest
 {
     private static readonly JsonSerializerOptions Reader = new() { Converters = { new GeoJsonConverterFactory() } };
 
@@ -57,9 +58,36 @@ public sealed class RoutesGeoJsonTests : TempFolderTest
     }
 
     [Fact]
-    public void Planar_jobs_get_no_map_file()
+    public void A_solve_of_the_lat_lon_demo_leaves_a_map_file_and_a_planar_job_none()
     {
-        var instance = TinyJob.Create();
-        Assert.False(instance.LatLon);
+        // Real runs of `anneal solve` (insertion only, for speed): the run folder of the lat/lon demo holds
+        // routes.geojson, whose route lines visit the stops of routes.csv; harbour-small (planar x/y in km) gets none.
+        string latLon = Path.Combine(Dir, "merrowdale");
+        string planar = Path.Combine(Dir, "harbour-small");
+
+        int a = CliApp.Run(["solve", Demo, "--solvers", "insertion", "--time", "2", "--out", latLon, "--quiet"], Out, Err);
+        int b = CliApp.Run(["solve", Path.Combine(BenchmarkData.RepoRoot, "instances", "harbour-small"), "--solvers", "insertion", "--time", "2", "--out", planar, "--quiet"], Out, Err);
+
+        Assert.Equal(ExitCodes.Success, a);
+        Assert.Equal(ExitCodes.Success, b);
+        Assert.True(File.Exists(Path.Combine(planar, "routes.csv")), All);
+        Assert.False(File.Exists(Path.Combine(planar, RoutesGeoJsonWriter.FileName)), "a planar job has no place on the Earth");
+        Assert.Empty(Directory.GetFiles(planar, "*.geojson*"));
+
+        var features = JsonSerializer.Deserialize<FeatureCollection>(File.ReadAllText(Path.Combine(latLon, RoutesGeoJsonWriter.FileName)), Reader)!;
+        var instance = InputLoader.Load(Demo).Instance;
+        var lines = features.Where(f => f.Geometry is LineString).ToList();
+        int served = lines.Sum(f => ((LineString)f.Geometry).Coordinates.Length - 2);
+        var csvStops = File.ReadAllLines(Path.Combine(latLon, "routes.csv")).Skip(1).Count(l => l.Split(',')[2] == "stop");
+        Assert.Equal(csvStops, served);
+        Assert.Equal(instance.StopCount, served); // the demo is feasible: every stop on a line
+        foreach (var line in lines)
+        {
+            foreach (var c in ((LineString)line.Geometry).Coordinates)
+            {
+                Assert.Contains(instance.Stops.Select(s => (s.X, s.Y)).Concat(instance.Depots.Select(d => (d.X, d.Y))),
+                    p => Math.Abs(p.X - c.X) < 1e-6 && Math.Abs(p.Y - c.Y) < 1e-6);
+            }
+        }
     }
 }
