@@ -31,7 +31,7 @@ public static class CostModel
         }
 
         var c = instance.Costs;
-        return (m.MissingEquipment * w.Equipment) + (m.TimeWindowViolation * c.HardTimeWindow * w.TimeWindow)
+        return ((m.MissingEquipment + m.PairBreaks) * w.Equipment) + (m.TimeWindowViolation * c.HardTimeWindow * w.TimeWindow)
             + (m.Overload * c.HardCapacity * w.Capacity) + (m.Overtime * c.HardOvertime * w.Overtime)
             + (m.DurationExcess * c.HardDuration * w.Duration);
     }
@@ -61,6 +61,7 @@ public static class CostModel
 
         var c = instance.Costs;
         return m.MissingEquipment == 0
+            && m.PairBreaks == 0
             && m.TimeWindowViolation * c.HardTimeWindow <= tolerance
             && m.Overload * c.HardCapacity <= tolerance
             && m.Overtime * c.HardOvertime <= tolerance

@@ -29,7 +29,7 @@ public static class PlanEvaluator
         {
             var visits = new VisitTimes[route.Stops.Length];
             var m = RouteScheduler.Schedule(instance, route.Vehicle, route.Stops, visits);
-            var loads = LoadsAfter(instance, route.Stops);
+            var loads = RouteLoads.After(instance, route.Stops);
             foreach (int s in route.Stops)
             {
                 served[s] = true;
@@ -82,9 +82,10 @@ public static class PlanEvaluator
                 durationExcess += m.DurationExcess * rules.MaxDuration.Price;
             }
 
-            ReportRoute(instance, route, m, visits, violations);
+            ReportRoute(instance, route, m, visits, loads, violations);
         }
 
+        PairReport.Add(instance, plan, violations);
         var unserved = new List<int>();
         double unservedCost = 0;
         for (int s = 0; s < instance.StopCount; s++)
@@ -145,33 +146,7 @@ public static class PlanEvaluator
         return total;
     }
 
-    private static double[][] LoadsAfter(Instance instance, int[] stops)
-    {
-        int dims = instance.DimensionCount;
-        var load = new double[dims];
-        foreach (int s in stops)
-        {
-            for (int d = 0; d < dims; d++)
-            {
-                load[d] += instance.Demand(s, d);
-            }
-        }
-
-        var after = new double[stops.Length][];
-        for (int k = 0; k < stops.Length; k++)
-        {
-            for (int d = 0; d < dims; d++)
-            {
-                load[d] -= instance.Demand(stops[k], d);
-            }
-
-            after[k] = (double[])load.Clone();
-        }
-
-        return after;
-    }
-
-    private static void ReportRoute(Instance instance, PlannedRoute route, in RouteMetrics m, VisitTimes[] visits, List<Violation> violations)
+    private static void ReportRoute(Instance instance, PlannedRoute route, in RouteMetrics m, VisitTimes[] visits, double[][] loads, List<Violation> violations)
     {
         var rules = instance.Rules;
         var v = instance.Vehicles[route.Vehicle];
@@ -197,8 +172,10 @@ public static class PlanEvaluator
 
         if (m.Overload > Tolerance)
         {
-            violations.Add(new Violation(RuleKind.Capacity, rules.Capacity.Hard, v.Id, null, m.Overload,
-                $"vehicle {v.Id} is loaded {m.Overload:0.##} units over its capacity"));
+            violations.Add(instance.HasPickups
+                ? OverloadAlong(instance, route, m.Overload, loads)
+                : new Violation(RuleKind.Capacity, rules.Capacity.Hard, v.Id, null, m.Overload,
+                    $"vehicle {v.Id} is loaded {m.Overload:0.##} units over its capacity"));
         }
 
         if (m.Overtime > Tolerance)
@@ -212,6 +189,36 @@ public static class PlanEvaluator
             violations.Add(new Violation(RuleKind.MaxDuration, rules.MaxDuration.Hard, v.Id, null, m.DurationExcess,
                 $"route of vehicle {v.Id} lasts {m.DurationExcess:0.##} {unit} longer than allowed"));
         }
+    }
+
+    /// <summary>With pickups the load changes along the route: name where it first goes over and by how much.</summary>
+    private static Violation OverloadAlong(Instance instance, PlannedRoute route, double overload, double[][] loads)
+    {
+        var v = instance.Vehicles[route.Vehicle];
+        int dims = instance.DimensionCount;
+        for (int d = 0; d < dims; d++)
+        {
+            double capacity = instance.Capacity(route.Vehicle, d);
+            double start = RouteLoads.Departure(instance, route.Stops, d);
+            if (start > capacity + Tolerance)
+            {
+                return new Violation(RuleKind.Capacity, instance.Rules.Capacity.Hard, v.Id, null, overload,
+                    $"vehicle {v.Id} leaves the depot with {start:0.##} {instance.DimensionNames[d]}, {start - capacity:0.##} over its capacity {capacity:0.##}");
+            }
+
+            for (int k = 0; k < loads.Length; k++)
+            {
+                if (loads[k][d] > capacity + Tolerance)
+                {
+                    var stop = instance.Stops[route.Stops[k]];
+                    return new Violation(RuleKind.Capacity, instance.Rules.Capacity.Hard, v.Id, stop.Id, overload,
+                        $"vehicle {v.Id} carries {loads[k][d]:0.##} {instance.DimensionNames[d]} after stop {stop.Id} (position {k + 1}), {loads[k][d] - capacity:0.##} over its capacity {capacity:0.##}");
+                }
+            }
+        }
+
+        return new Violation(RuleKind.Capacity, instance.Rules.Capacity.Hard, v.Id, null, overload,
+            $"vehicle {v.Id} is loaded {overload:0.##} units over its capacity");
     }
 
     private static string EquipmentList(Instance instance, ulong mask)

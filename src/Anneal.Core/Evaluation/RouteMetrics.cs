@@ -17,4 +17,7 @@ public struct RouteMetrics
     public double Overtime;
     public double DurationExcess;
     public int MissingEquipment;
+
+    /// <summary>Stops whose collect-and-deliver pair this route breaks (see <see cref="RouteLoads.PairBreaks"/>); always a hard rule.</summary>
+    public int PairBreaks;
 }

@@ -32,7 +32,6 @@ public static class RouteScheduler
 
         var v = instance.Vehicles[vehicle];
         var travel = instance.Travel;
-        int dims = instance.DimensionCount;
         int home = instance.DepotLocation(v.StartDepot);
         int end = instance.DepotLocation(v.EndDepot);
 
@@ -50,19 +49,7 @@ public static class RouteScheduler
         m.Overtime = Math.Max(0, m.Return - v.ShiftEnd);
         m.DurationExcess = Math.Max(0, m.Duration - v.MaxDuration);
 
-        // Load: everything is loaded at the start depot.
-        double overload = 0;
-        for (int d = 0; d < dims; d++)
-        {
-            double load = 0;
-            for (int k = 0; k < stops.Length; k++)
-            {
-                load += instance.DemandFlat[(stops[k] * dims) + d];
-            }
-
-            overload += Math.Max(0, load - instance.CapacityFlat[(vehicle * dims) + d]);
-        }
-
+        double overload = RouteLoads.Overload(instance, vehicle, stops);
         m.Overload = overload;
 
         ulong needed = 0;
@@ -72,6 +59,7 @@ public static class RouteScheduler
         }
 
         m.MissingEquipment = BitOperations.PopCount(needed & ~v.Equipment);
+        m.PairBreaks = RouteLoads.PairBreaks(instance, stops);
 
         double distance = travel.Distance(home, stops[0]);
         for (int k = 1; k < stops.Length; k++)

@@ -9,6 +9,9 @@ public enum RuleKind
     MaxDuration,
     Equipment,
     Unserved,
+
+    /// <summary>A collect-and-deliver pair not served by one vehicle, collection first.</summary>
+    Pair,
 }
 
 public static class RuleKindNames
@@ -21,6 +24,7 @@ public static class RuleKindNames
         RuleKind.MaxDuration => "max-duration",
         RuleKind.Equipment => "equipment",
         RuleKind.Unserved => "unserved",
+        RuleKind.Pair => "pair",
         _ => throw new ArgumentOutOfRangeException(nameof(rule)),
     };
 }

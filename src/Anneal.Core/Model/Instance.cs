@@ -34,6 +34,16 @@ public sealed class Instance
     internal readonly double[] WindowOpen;
     internal readonly double[] WindowClose;
     internal readonly double[] CapacityFlat;
+    internal readonly double[] PickupFlat;
+
+    /// <summary>Per stop: the other stop of its pair (collection for a delivery, delivery for a collection), else -1.</summary>
+    internal readonly int[] PartnerOf;
+
+    /// <summary>True when some stop collects something (returns or pairs): the load then changes along a route.</summary>
+    public bool HasPickups { get; }
+
+    /// <summary>True when some stops form collect-and-deliver pairs.</summary>
+    public bool HasPairs { get; }
 
     /// <summary>True when every stop has exactly one window (allows O(1) segment concatenation).</summary>
     public bool SingleWindows { get; }
@@ -69,6 +79,9 @@ public sealed class Instance
 
         int dims = DimensionCount;
         DemandFlat = new double[StopCount * dims];
+        PickupFlat = new double[StopCount * dims];
+        PartnerOf = Pairs.Link(stops);
+        bool pickups = false;
         Service = new double[StopCount];
         WindowOffset = new int[StopCount + 1];
         var open = new List<double>();
@@ -80,6 +93,9 @@ public sealed class Instance
             for (int d = 0; d < dims; d++)
             {
                 DemandFlat[(i * dims) + d] = s.Demand[d];
+                double up = d < s.Pickup.Length ? s.Pickup[d] : 0;
+                PickupFlat[(i * dims) + d] = up;
+                pickups |= up != 0;
             }
 
             Service[i] = s.ServiceTime;
@@ -97,6 +113,8 @@ public sealed class Instance
         WindowOpen = open.ToArray();
         WindowClose = close.ToArray();
         SingleWindows = single;
+        HasPairs = Array.Exists(PartnerOf, p => p >= 0);
+        HasPickups = pickups || HasPairs;
         CapacityFlat = new double[vehicles.Count * dims];
         for (int v = 0; v < vehicles.Count; v++)
         {
@@ -124,6 +142,18 @@ public sealed class Instance
     public int DepotLocation(int depot) => StopCount + depot;
 
     public double Demand(int stop, int dimension) => DemandFlat[(stop * DimensionCount) + dimension];
+
+    /// <summary>What the stop collects in the dimension.</summary>
+    public double Pickup(int stop, int dimension) => PickupFlat[(stop * DimensionCount) + dimension];
+
+    /// <summary>What the stop's delivery takes from the depot: its demand, or 0 for the delivery end of a pair.</summary>
+    public double DepotLoad(int stop, int dimension) => PartnerOf[stop] >= 0 && Stops[stop].CollectFrom >= 0 ? 0 : Demand(stop, dimension);
+
+    /// <summary>The other stop of the stop's pair, or -1 when it is in none.</summary>
+    public int Partner(int stop) => PartnerOf[stop];
+
+    /// <summary>True for the collection end of a pair.</summary>
+    public bool IsCollection(int stop) => PartnerOf[stop] >= 0 && Stops[stop].CollectFrom < 0;
 
     [System.Runtime.CompilerServices.MethodImpl(System.Runtime.CompilerServices.MethodImplOptions.AggressiveInlining)]
     public double Capacity(int vehicle, int dimension) => CapacityFlat[(vehicle * DimensionCount) + dimension];

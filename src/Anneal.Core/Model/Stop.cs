@@ -1,6 +1,10 @@
 namespace Anneal.Core.Model;
 
-/// <summary>A place to deliver to. Demand is loaded at the vehicle's start depot.</summary>
+/// <summary>
+/// A place to deliver to and collect from. Demand is loaded at the vehicle's start depot, unless the stop is the
+/// delivery end of a pair (<see cref="CollectFrom"/>): then it is what the vehicle collected at the partner stop.
+/// What a stop collects (<see cref="Pickup"/>) rides on to the depot, or to its pair's delivery stop.
+/// </summary>
 public sealed record Stop
 {
     public required string Id { get; init; }
@@ -15,6 +19,15 @@ public sealed record Stop
 
     /// <summary>One value per demand dimension of the instance.</summary>
     public required double[] Demand { get; init; }
+
+    /// <summary>What is collected here, one value per dimension; empty means nothing (a delivery-only stop).</summary>
+    public double[] Pickup { get; init; } = [];
+
+    /// <summary>
+    /// Index of the stop (in <see cref="Instance.Stops"/>) where this stop's delivery is collected, or -1 when it comes
+    /// from the depot. Both stops of a pair are served by one vehicle, the collection first.
+    /// </summary>
+    public int CollectFrom { get; init; } = -1;
 
     public double ServiceTime { get; init; }
 

@@ -50,6 +50,11 @@ public static class InputLoader
             return new LoadedInput(SolomonReader.Parse(text, path), new JobSettings { Objective = Core.Model.Objective.Distance }, "solomon", path);
         }
 
+        if (LiLimReader.LooksLike(text))
+        {
+            return new LoadedInput(LiLimReader.Parse(text, path), new JobSettings { Objective = Core.Model.Objective.VehiclesThenDistance }, "lilim", path);
+        }
+
         if (Path.GetFileName(path).ToLowerInvariant() is "stops.csv" or "depots.csv" or "vehicles.csv" or "matrix.csv" or "settings.json")
         {
             throw new InputException(new InputProblem(path, null, null, null, "this is one file of a CSV job; a job is read as a whole folder",
@@ -57,8 +62,8 @@ public static class InputLoader
         }
 
         throw new InputException(new InputProblem(path, 1, null, null,
-            "the format is not recognised (neither a Solomon VRPTW file nor a CVRPLIB/TSPLIB .vrp file)",
-            "give a CSV job folder, a Solomon text file (VEHICLE and CUSTOMER sections) or a CVRPLIB file (NODE_COORD_SECTION)"));
+            "the format is not recognised (neither a Solomon VRPTW file, a Li & Lim pickup-and-delivery file nor a CVRPLIB/TSPLIB .vrp file)",
+            "give a CSV job folder, a Solomon text file (VEHICLE and CUSTOMER sections), a Li & Lim file (a line of 3 numbers, then 9 per task) or a CVRPLIB file (NODE_COORD_SECTION)"));
     }
 
     /// <summary>"did you mean 'marl-valley'? " when the folder above holds a name close to the one typed.</summary>

@@ -3,7 +3,7 @@ using Anneal.Core.Model;
 namespace Anneal.Formats.Input;
 
 /// <summary>An instance read from disk, with the settings that came with it and which format it was.</summary>
-/// <param name="Format">"csv-job", "solomon" or "cvrplib".</param>
+/// <param name="Format">"csv-job", "workbook", "solomon", "lilim" or "cvrplib".</param>
 public sealed record LoadedInput(Instance Instance, JobSettings Settings, string Format, string Path)
 {
     /// <summary>How the files were read, in words for `check` (e.g. "semicolon-separated, decimal commas"); null for text formats.</summary>

@@ -87,7 +87,7 @@ public static class RouteFileReader
         return new Plan(routes);
     }
 
-    /// <summary>Splits "Route #k: ids" (also "Route #k : ids") into the vehicle index and the id tokens.</summary>
+    /// <summary>Splits "Route #k: ids" (also "Route #k : ids" and "Route k : ids", as some best-known tables write it) into the vehicle index and the id tokens.</summary>
     private static bool RouteNumber(TextLine line, Instance instance, ProblemLog log, out int vehicle, out string label, out string[] ids)
     {
         vehicle = -1;
@@ -96,13 +96,19 @@ public static class RouteFileReader
         int colon = text.IndexOf(':', StringComparison.Ordinal);
         int hash = text.IndexOf('#', StringComparison.Ordinal);
         label = colon > 0 ? text[..colon].Trim() : line.Tokens[0];
-        if (colon < 0 || hash < 0 || hash > colon || text[5..hash].Trim().Length != 0)
+        if (hash > colon)
+        {
+            hash = -1;
+        }
+
+        int numberAt = hash >= 0 ? hash + 1 : 5;
+        if (colon < 0 || text.Length < 5 || (hash >= 0 && text[5..hash].Trim().Length != 0))
         {
             log.Add(line.Row, null, text, "a route line must read 'Route #k: ids'", Format);
             return false;
         }
 
-        string number = text[(hash + 1)..colon].Trim();
+        string number = text[numberAt..colon].Trim();
         if (!long.TryParse(number, NumberStyles.None, CultureInfo.InvariantCulture, out long k) || k < 1)
         {
             log.Add(line.Row, label, number, "the route number is not a whole number of at least 1", Format);

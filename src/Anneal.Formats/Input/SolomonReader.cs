@@ -257,18 +257,7 @@ public static class SolomonReader
         x[n] = depotRow[1];
         y[n] = depotRow[2];
         var depots = new[] { new Depot { Id = rows[0].Id, X = depotRow[1], Y = depotRow[2] } };
-        var vehicles = new Vehicle[count];
-        for (int k = 0; k < count; k++)
-        {
-            vehicles[k] = new Vehicle
-            {
-                Id = (k + 1).ToString(System.Globalization.CultureInfo.InvariantCulture),
-                Capacity = [capacity],
-                ShiftStart = depotRow[4],
-                ShiftEnd = depotRow[5],
-            };
-        }
-
+        var vehicles = BenchmarkFleet.Identical(count, capacity, depotRow[4], depotRow[5]);
         return new Instance(NameOf(lines, fileName), stops, depots, vehicles, ["demand"], [], RuleSet.AllHard, Objective.Distance,
             TravelTable.Planar(x, y, roundToInteger: false), Units.Plain);
     }

@@ -37,6 +37,27 @@ public class BestKnownRecostTests
     }
 
     [SkippableTheory]
+    [InlineData("lc101")]
+    [InlineData("lc201")]
+    [InlineData("lr101")]
+    [InlineData("lr201")]
+    [InlineData("lrc101")]
+    [InlineData("lrc201")]
+    [InlineData("lc1_2_1")]
+    [InlineData("lr1_2_1")]
+    [InlineData("lrc1_2_1")]
+    public void Pickup_and_delivery_routes_match_the_published_value(string name)
+    {
+        // Source: bks.csv, objective vehicles-first, euclidean-double (SINTEF TOP table of best-known solutions for the
+        // Li & Lim benchmark). The value column is the distance; the evaluator must find every pair on one route, collected first.
+        var expected = BestKnownValues.Find(name, "vehicles-first", "euclidean-double");
+        var instance = LiLimReader.Parse(File.ReadAllText(BenchmarkData.File($"lilim/{name}.txt")), name + ".txt");
+        var plan = RouteFileReader.Read(BenchmarkData.File($"lilim/{name}.vehicles-first.sol"), instance);
+
+        Check(instance.With(objective: Objective.Distance), plan, expected);
+    }
+
+    [SkippableTheory]
     [InlineData("A-n32-k5")]
     [InlineData("X-n101-k25")]
     public void Cvrp_routes_match_the_published_value(string name)
