@@ -1,4 +1,5 @@
 using System.CommandLine;
+using System.CommandLine.Invocation;
 using Anneal.Cli.Commands;
 using Anneal.Cli.Reporting;
 using Anneal.Core.Solving;
@@ -71,6 +72,14 @@ public static class CliApp
     public static RootCommand BuildRoot(CliContext context)
     {
         var root = new RootCommand("Anneal plans delivery routes under hard and soft rules (vehicle routing with capacities and time windows).");
+        foreach (var option in root.Options)
+        {
+            if (option is VersionOption version)
+            {
+                version.Action = new PrintVersion(context);
+            }
+        }
+
         root.Subcommands.Add(CheckCommand.Create(context));
         root.Subcommands.Add(EvaluateCommand.Create(context));
         root.Subcommands.Add(SolveCommand.Create(context));
@@ -79,5 +88,15 @@ public static class CliApp
         root.Subcommands.Add(WorkerCommand.Create(context));
         root.Subcommands.Add(Commands.Queue.QueueCommand.Create(context));
         return root;
+    }
+
+    /// <summary>`anneal --version`: the version and the commit it was built from, e.g. "0.1.0 (commit f43935c26a4…)".</summary>
+    private sealed class PrintVersion(CliContext context) : SynchronousCommandLineAction
+    {
+        public override int Invoke(ParseResult parseResult)
+        {
+            context.Out.WriteLine(ToolVersion.Text);
+            return ExitCodes.Success;
+        }
     }
 }

@@ -13,7 +13,7 @@ public sealed record JobRecord(string Job, string Input, string Worker, int Atte
 {
     public const string FileName = "job.json";
 
-    private static readonly JsonSerializerOptions Json = new(JsonSerializerDefaults.Web) { WriteIndented = true };
+    private static readonly JsonSerializerOptions Json = new(JsonSerializerDefaults.Web) { WriteIndented = true, Encoder = Anneal.Formats.Output.JsonText.Encoder };
 
     public void Write(string folder) =>
         AtomicFile.Write(Path.Combine(folder, FileName), stream => JsonSerializer.Serialize(stream, this, Json));

@@ -13,7 +13,7 @@ public sealed class StatusFile(string path, string workerId, DateTimeOffset star
 
     private const int RecentKept = 20;
 
-    private static readonly JsonSerializerOptions Json = new(JsonSerializerDefaults.Web) { WriteIndented = true };
+    private static readonly JsonSerializerOptions Json = new(JsonSerializerDefaults.Web) { WriteIndented = true, Encoder = Anneal.Formats.Output.JsonText.Encoder };
 
     private readonly Lock _lock = new();
     private readonly Dictionary<ClaimedJob, JobProgress> _running = [];

@@ -13,7 +13,14 @@ public sealed record WorkerStatus(
     int Failed,
     int Requeued,
     IReadOnlyList<RunningJobStatus> Running,
-    IReadOnlyList<FinishedJobStatus> Recent);
+    IReadOnlyList<FinishedJobStatus> Recent)
+{
+    /// <summary>The version of Anneal this worker runs.</summary>
+    public string AnnealVersion { get; init; } = Anneal.Formats.Output.ToolVersion.Version;
+
+    /// <summary>The commit that version was built from.</summary>
+    public string Commit { get; init; } = Anneal.Formats.Output.ToolVersion.Commit;
+}
 
 /// <summary>A job being solved, with each solver's best so far.</summary>
 public sealed record RunningJobStatus(string Job, int Attempt, DateTimeOffset ClaimedAt, double ElapsedSeconds, IReadOnlyList<SolverStatus> Solvers);

@@ -19,7 +19,7 @@ public sealed record MachineInfo(int ProcessorCount, string Os, string Architect
     public bool Oversubscribed => Jobs > ProcessorCount;
 
     public string Line() =>
-        $"{ProcessorCount} processors ({Architecture}), {Os}, {Runtime}, {Date:yyyy-MM-dd HH:mm zzz}; {Jobs} run(s) at a time"
+        $"Anneal {ToolVersion.Text}; {ProcessorCount} processors ({Architecture}), {Os}, {Runtime}, {Date:yyyy-MM-dd HH:mm zzz}; {Jobs} run(s) at a time"
         + (Oversubscribed ? " — more runs than processors, so the solvers shared cores and their timings are not fair" : ", one solver per core");
 
     /// <summary>Adds this invocation to machine.json in <paramref name="folder"/> (written atomically).</summary>
@@ -50,8 +50,10 @@ public sealed record MachineInfo(int ProcessorCount, string Os, string Architect
             ["runtime"] = Runtime,
             ["date"] = Date.ToString("o", System.Globalization.CultureInfo.InvariantCulture),
             ["jobs"] = Jobs,
+            ["annealVersion"] = ToolVersion.Version,
+            ["commit"] = ToolVersion.Commit,
         });
         var root = new JsonObject { ["invocations"] = runs };
-        AtomicFile.WriteText(path, w => w.Write(root.ToJsonString(new JsonSerializerOptions { WriteIndented = true })));
+        AtomicFile.WriteText(path, w => w.Write(root.ToJsonString(new JsonSerializerOptions { WriteIndented = true, Encoder = JsonText.Encoder })));
     }
 }

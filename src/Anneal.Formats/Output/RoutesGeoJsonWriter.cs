@@ -16,7 +16,7 @@ public static class RoutesGeoJsonWriter
     public static void Write(string path, Instance instance, PlanEvaluation plan) =>
         AtomicFile.Write(path, stream =>
         {
-            using var json = new Utf8JsonWriter(stream, new JsonWriterOptions { Indented = true });
+            using var json = new Utf8JsonWriter(stream, new JsonWriterOptions { Indented = true, Encoder = JsonText.Encoder });
             Write(json, instance, plan);
         });
 

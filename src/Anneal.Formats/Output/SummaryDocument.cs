@@ -19,7 +19,14 @@ public sealed record SummaryDocument(
     IReadOnlyList<string> Cautions,
     DateTimeOffset GeneratedAt,
     double? LowerBound = null,
-    IReadOnlyList<string>? Notes = null);
+    IReadOnlyList<string>? Notes = null)
+{
+    /// <summary>The version of Anneal that wrote the file.</summary>
+    public string AnnealVersion { get; init; } = ToolVersion.Version;
+
+    /// <summary>The commit that version was built from ("unknown" without git at build time).</summary>
+    public string Commit { get; init; } = ToolVersion.Commit;
+}
 
 /// <summary>The written plan as the evaluator judged it.</summary>
 public sealed record PlanSummary(

@@ -14,6 +14,7 @@ public static class SummaryJsonWriter
     {
         WriteIndented = true,
         PropertyNamingPolicy = JsonNamingPolicy.CamelCase,
+        Encoder = JsonText.Encoder,
         DefaultIgnoreCondition = JsonIgnoreCondition.Never,
 
         // A diverged solver may report an infinite objective; write it rather than fail the whole run.

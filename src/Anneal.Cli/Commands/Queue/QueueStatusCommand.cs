@@ -11,7 +11,7 @@ public static class QueueStatusCommand
 {
     private const int Listed = 10;
 
-    private static readonly JsonSerializerOptions Json = new(JsonSerializerDefaults.Web) { WriteIndented = true };
+    private static readonly JsonSerializerOptions Json = new(JsonSerializerDefaults.Web) { WriteIndented = true, Encoder = Anneal.Formats.Output.JsonText.Encoder };
 
     public static Command Create(CliContext context)
     {

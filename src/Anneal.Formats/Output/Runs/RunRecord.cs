@@ -23,4 +23,10 @@ public sealed record RunRecord(
     DateTimeOffset GeneratedAt)
 {
     public const int CurrentVersion = 1;
+
+    /// <summary>The version of Anneal that wrote the file (older files: the reading version's).</summary>
+    public string AnnealVersion { get; init; } = ToolVersion.Version;
+
+    /// <summary>The commit that version was built from.</summary>
+    public string Commit { get; init; } = ToolVersion.Commit;
 }
