@@ -86,6 +86,11 @@ public static class SolveCommand
             context.Err.WriteLine("warning: " + crowded);
         }
 
+        if (Anneal.Core.Screening.RuleScreen.ObjectiveWarning(instance) is { } blind)
+        {
+            context.Err.WriteLine("warning: " + blind);
+        }
+
         using var stop = CancellationTokenSource.CreateLinkedTokenSource(context.Cancel);
         using var signals = context.HandleSignals ? new ShutdownSignals(stop) : null;
         var progress = request.Quiet ? null : new ProgressReporter(context.Err, context.ProgressIsTerminal, plan.Options.TimeLimit);

@@ -6,7 +6,7 @@ namespace Anneal.Core.Screening;
 /// <summary>
 /// Rules and data that are valid but likely not what was meant, because a setting would otherwise vanish without a
 /// word: a price on a hard rule that ignores it, optional stops that cost nothing to leave out, a capacity that no
-/// demand uses. `check` prints these as warnings.
+/// demand uses, a cost objective without prices. `check` prints these as warnings.
 /// </summary>
 public static class RuleScreen
 {
@@ -16,6 +16,11 @@ public static class RuleScreen
     public static IReadOnlyList<string> Warnings(Instance instance)
     {
         var warnings = new List<string>();
+        if (ObjectiveWarning(instance) is { } objective)
+        {
+            warnings.Add(objective);
+        }
+
         var r = instance.Rules;
         string unit = instance.Units.TimeWord;
         UnusedPrice("time windows", r.TimeWindows, "timeWindows", $"per {unit} late");
@@ -63,6 +68,31 @@ public static class RuleScreen
                     $"{name} is hard, so its price {rule.Price:0.##} {per} is not used; set rules.{key}.hard to false to make it soft at that price"));
             }
         }
+    }
+
+    /// <summary>
+    /// A cost objective whose vehicles have no price at all: every route then costs 0, so the objective cannot tell
+    /// plans apart (only soft-rule prices and penalties still count; ties fall to distance, then duration). Null when
+    /// the objective can tell them apart. `solve` prints it too.
+    /// </summary>
+    public static string? ObjectiveWarning(Instance instance)
+    {
+        if (instance.Objective != Objective.Cost || instance.Vehicles.Count == 0)
+        {
+            return null;
+        }
+
+        foreach (var v in instance.Vehicles)
+        {
+            if (v.FixedCost != 0 || v.CostPerDistance != 0 || v.CostPerHour != 0)
+            {
+                return null;
+            }
+        }
+
+        return "the objective is cost, but no vehicle has a fixed_cost, cost_per_km or cost_per_hour, so every route costs 0 and the objective "
+            + "cannot tell plans apart (only soft-rule prices and penalties count; ties go to the shorter distance, then the shorter duration). "
+            + "Give the vehicles their prices in vehicles.csv, or set \"objective\": \"distance\" in settings.json (or --objective distance).";
     }
 
     private static string List(List<string> ids) =>

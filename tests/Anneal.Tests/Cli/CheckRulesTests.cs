@@ -81,6 +81,32 @@ public sealed class CheckRulesTests : CommandTest
     }
 
     [Fact]
+    public void A_cost_objective_without_any_price_is_warned_about_by_check_and_solve()
+    {
+        // Issue 17: with no fixed_cost, cost_per_km or cost_per_hour anywhere, every route costs 0.
+        var files = JobFolder.ValidPlanar();
+        files["settings.json"] = """{ "objective": "cost" }""";
+        files["vehicles.csv"] = files["vehicles.csv"].Replace(",50,0.4,22,", ",,,,", StringComparison.Ordinal).Replace(",70,0.5,25,", ",0,0,0,", StringComparison.Ordinal);
+        const string Blind = "warning: the objective is cost, but no vehicle has a fixed_cost, cost_per_km or cost_per_hour";
+
+        Assert.Contains(Blind, Check(files), StringComparison.Ordinal);
+
+        using (var job = new JobFolder(files))
+        {
+            int code = CliApp.Run(["solve", job.Path, "--solvers", "insertion", "--out", Path.Combine(Dir, "run"), "--quiet"], Out, Err);
+            Assert.True(code is ExitCodes.Success or ExitCodes.Infeasible, Err.ToString());
+            Assert.Contains(Blind, Err.ToString(), StringComparison.Ordinal);
+        }
+
+        // One price anywhere, or another objective, lets the objective tell plans apart: no warning.
+        files["vehicles.csv"] = files["vehicles.csv"].Replace(",0,0,0,", ",0,0.1,0,", StringComparison.Ordinal);
+        Assert.DoesNotContain(Blind, Check(files), StringComparison.Ordinal);
+        files["vehicles.csv"] = files["vehicles.csv"].Replace(",0,0.1,0,", ",0,0,0,", StringComparison.Ordinal);
+        files["settings.json"] = """{ "objective": "distance" }""";
+        Assert.DoesNotContain(Blind, Check(files), StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void Negative_rule_prices_are_refused()
     {
         var files = JobFolder.ValidPlanar();
@@ -96,6 +122,7 @@ public sealed class CheckRulesTests : CommandTest
     private string Check(Dictionary<string, string> files)
     {
         using var job = new JobFolder(files);
+        Out.GetStringBuilder().Clear();
         Assert.Equal(ExitCodes.Success, CliApp.Run(["check", job.Path], Out, Err));
         return Out.ToString();
     }
