@@ -64,11 +64,7 @@ public sealed class ExactSolver : ISolver
         int workers = Math.Max(1, _settings.Workers ?? options.Threads);
         solver.StringParameters = string.Create(CultureInfo.InvariantCulture,
             $"max_time_in_seconds:{seconds} num_workers:{workers} random_seed:{options.Seed}");
-        CpSolverStatus status;
-        using (cancel.Register(solver.StopSearch))
-        {
-            status = solver.Solve(exact.Model, keeper);
-        }
+        var status = StoppableCpSat.Solve(solver, exact.Model, keeper, cancel);
 
         if (status is CpSolverStatus.Optimal or CpSolverStatus.Feasible)
         {
@@ -153,12 +149,7 @@ public sealed class ExactSolver : ISolver
         var fix = new CpSolver();
         double seconds = Math.Clamp(left.TotalSeconds / 10, 0.01, 2);
         fix.StringParameters = string.Create(CultureInfo.InvariantCulture, $"max_time_in_seconds:{seconds} num_workers:1 fix_variables_to_their_hinted_value:true");
-        CpSolverStatus status;
-        using (cancel.Register(fix.StopSearch))
-        {
-            status = fix.Solve(exact.Model);
-        }
-
+        var status = StoppableCpSat.Solve(fix, exact.Model, null, cancel);
         if (status is CpSolverStatus.Optimal or CpSolverStatus.Feasible)
         {
             exact.HintAll(fix.Response!.Solution);
