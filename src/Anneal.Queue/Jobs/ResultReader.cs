@@ -7,6 +7,9 @@ namespace Anneal.Queue.Jobs;
 /// <param name="Interrupted">The stored result was cut short (a worker stopping); for a queued job it is replaced by the next full run.</param>
 public sealed record JobOverview(long Id, string Name, string State, int Attempt, bool HasResult, bool Interrupted, string? Error, DateTimeOffset? FinishedAt);
 
+/// <summary>One step of a job's history: claimed, done, requeued, expired, refused, failed, retry.</summary>
+public sealed record JobEvent(DateTimeOffset At, long Claim, string? Worker, string Event, string? Detail);
+
 /// <summary>Which jobs `fetch` wants: by id, all of them, or those finished since a moment.</summary>
 public sealed record JobSelection(IReadOnlyList<long>? Ids, DateTimeOffset? Since)
 {
@@ -49,6 +52,20 @@ public static class ResultReader
     {
         var found = await FindAsync(db, new JobSelection([id], null), cancel);
         return found.Count == 0 ? null : found[0];
+    }
+
+    public static async Task<IReadOnlyList<JobEvent>> EventsAsync(NpgsqlDataSource db, long id, CancellationToken cancel)
+    {
+        await using var cmd = db.CreateCommand("SELECT at, claim, worker, event, detail FROM job_events WHERE job_id = @id ORDER BY id");
+        cmd.Parameters.AddWithValue("id", id);
+        var list = new List<JobEvent>();
+        await using var r = await cmd.ExecuteReaderAsync(cancel);
+        while (await r.ReadAsync(cancel))
+        {
+            list.Add(new JobEvent(r.GetFieldValue<DateTimeOffset>(0), r.GetInt64(1), r.IsDBNull(2) ? null : r.GetString(2), r.GetString(3), r.IsDBNull(4) ? null : r.GetString(4)));
+        }
+
+        return list;
     }
 
     /// <summary>The names and media types of a job's result files, without their content.</summary>

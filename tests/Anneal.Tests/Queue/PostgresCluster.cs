@@ -108,7 +108,8 @@ public sealed class PostgresCluster : IDisposable
             .FirstOrDefault();
     }
 
-    private static int FreePort()
+    /// <summary>A TCP port on 127.0.0.1 that nothing listens on right now.</summary>
+    internal static int FreePort()
     {
         var listener = new TcpListener(IPAddress.Loopback, 0);
         listener.Start();

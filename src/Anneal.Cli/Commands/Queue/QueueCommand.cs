@@ -12,6 +12,7 @@ public static class QueueCommand
         command.Subcommands.Add(QueueSubmitCommand.Create(context));
         command.Subcommands.Add(QueueStatusCommand.Create(context));
         command.Subcommands.Add(QueueFetchCommand.Create(context));
+        command.Subcommands.Add(QueueServeCommand.Create(context));
         return command;
     }
 }
