@@ -39,13 +39,14 @@ public static class RoutingModelBuilder
         var travel = new TravelCallbacks(model, manager, nodeLocation, nodeLocation.Length <= matrixLimit);
         var arcCost = ArcCosts(instance, scale, model, travel);
         Time(instance, scale, model, manager, travel);
-        Loads(instance, scale, model, nodeLocation);
+        Loads(instance, scale, model, manager, nodeLocation, notes);
         for (int v = 0; v < vehicles; v++)
         {
             model.SetFixedCostOfVehicle(scale.Cost(instance.Costs.Rates(v).Fixed), v);
         }
 
         Visits(instance, scale, model, manager, notes);
+        Pairs(instance, model, manager);
         notes.AddRange(scale.Notes);
         return new RoutingMapping(instance, scale, manager, model, travel, arcCost, notes);
     }
@@ -178,18 +179,28 @@ public static class RoutingModelBuilder
         }
     }
 
-    /// <summary>One dimension per demand dimension; everything is loaded at the start, so the end cumul is the route's load.</summary>
-    private static void Loads(Instance instance, IntegerScale scale, RoutingModel model, int[] nodeLocation)
+    /// <summary>
+    /// One dimension per demand dimension. Delivery only: everything is loaded at the start, so the cumul counts what
+    /// has been delivered and the end cumul is the route's load. With pickups the cumul is the load on board: each
+    /// stop adds what it collects and takes off what it delivers, and the start cumul (free) is pinned to the route's
+    /// deliveries from the depot, which a second dimension adds up, so capacity holds at every stop.
+    /// </summary>
+    private static void Loads(Instance instance, IntegerScale scale, RoutingModel model, RoutingIndexManager manager, int[] nodeLocation, List<string> notes)
     {
         var rules = instance.Rules;
         for (int d = 0; d < instance.DimensionCount; d++)
         {
-            var demand = new long[nodeLocation.Length];
+            var change = new long[nodeLocation.Length];
+            var fromDepot = new long[nodeLocation.Length];
             long total = 0;
+            bool depotLoads = false;
             for (int node = 0; node < instance.StopCount; node++)
             {
-                demand[node] = scale.DemandUp(instance.Demand(node, d));
-                total += demand[node];
+                long demand = scale.DemandUp(instance.Demand(node, d));
+                fromDepot[node] = scale.DemandUp(instance.DepotLoad(node, d));
+                depotLoads |= fromDepot[node] > 0;
+                change[node] = instance.HasPickups ? scale.DemandUp(instance.Pickup(node, d)) - demand : demand;
+                total += demand + scale.DemandUp(instance.Pickup(node, d));
             }
 
             var capacity = new long[instance.Vehicles.Count];
@@ -199,21 +210,73 @@ public static class RoutingModelBuilder
             }
 
             string name = "load " + instance.DimensionNames[d];
-            model.AddDimensionWithVehicleCapacity(model.RegisterUnaryTransitVector(demand), 0, capacity, true, name);
+            bool pinned = instance.HasPickups && depotLoads;
+            model.AddDimensionWithVehicleCapacity(model.RegisterUnaryTransitVector(change), 0, capacity, !pinned, name);
+            var load = model.GetMutableDimension(name);
+            if (pinned)
+            {
+                string carried = "from depot " + instance.DimensionNames[d];
+                model.AddDimension(model.RegisterUnaryTransitVector(fromDepot), 0, total + 1, true, carried);
+                var depot = model.GetMutableDimension(carried);
+                var solver = model.solver();
+                for (int v = 0; v < capacity.Length; v++)
+                {
+                    solver.Add(solver.MakeEquality(load.CumulVar(model.Start(v)), depot.CumulVar(model.End(v))));
+                }
+            }
+
             if (rules.Capacity.Hard)
             {
                 continue;
             }
 
-            var load = model.GetMutableDimension(name);
             long price = scale.PerLoadStep(rules.Capacity.Price, "overload price");
             for (int v = 0; v < capacity.Length; v++)
             {
                 if (!double.IsPositiveInfinity(instance.Capacity(v, d)))
                 {
-                    load.SetCumulVarSoftUpperBound(model.End(v), scale.LoadNearest(instance.Capacity(v, d)), price);
+                    long limit = scale.LoadNearest(instance.Capacity(v, d));
+                    load.SetCumulVarSoftUpperBound(instance.HasPickups ? model.Start(v) : model.End(v), limit, price);
                 }
             }
+
+            if (instance.HasPickups)
+            {
+                for (int node = 0; node < instance.StopCount; node++)
+                {
+                    long index = manager.NodeToIndex(node);
+                    load.SetCumulVarSoftUpperBound(index, scale.LoadNearest(instance.Capacity(0, d)), price);
+                }
+
+                notes.Add("approximated: with pickups a soft capacity is priced at every stop where the load is over (of the first vehicle's capacity), not once at the fullest point");
+            }
+        }
+    }
+
+    /// <summary>Each collect-and-deliver pair: one vehicle, collection first (the library's pickup-and-delivery constraint), both served or neither.</summary>
+    private static void Pairs(Instance instance, RoutingModel model, RoutingIndexManager manager)
+    {
+        if (!instance.HasPairs)
+        {
+            return;
+        }
+
+        var solver = model.solver();
+        var time = model.GetMutableDimension(TimeDimension);
+        for (int d = 0; d < instance.StopCount; d++)
+        {
+            int c = instance.Stops[d].CollectFrom;
+            if (c < 0)
+            {
+                continue;
+            }
+
+            long collect = manager.NodeToIndex(c);
+            long deliver = manager.NodeToIndex(d);
+            model.AddPickupAndDelivery(collect, deliver);
+            solver.Add(solver.MakeEquality(model.VehicleVar(collect), model.VehicleVar(deliver)));
+            solver.Add(solver.MakeEquality(model.ActiveVar(collect), model.ActiveVar(deliver)));
+            solver.Add(solver.MakeLessOrEqual(time.CumulVar(collect), time.CumulVar(deliver)));
         }
     }
 

@@ -90,7 +90,9 @@ internal sealed class RoutingSearch(Instance instance, SolveOptions options, OrT
         model.AddSearchMonitor(model.solver().MakeCustomLimit(stopped));
 
         var parameters = operations_research_constraint_solver.DefaultRoutingSearchParameters();
-        parameters.FirstSolutionStrategy = settings.FirstSolution;
+        // Savings ignores pairs; inserting whole pairs is the library's first-solution method for pickup and delivery.
+        var first = instance.HasPairs ? FirstSolutionStrategy.Types.Value.ParallelCheapestInsertion : settings.FirstSolution;
+        parameters.FirstSolutionStrategy = first;
         parameters.LocalSearchMetaheuristic = settings.Metaheuristic;
         settings.Tune(parameters, instance.StopCount);
         if (options.IterationLimit is long iterations)
@@ -124,7 +126,7 @@ internal sealed class RoutingSearch(Instance instance, SolveOptions options, OrT
         {
             // The construction broke a hard rule (or OR-Tools' rounding refused it): OR-Tools finds its own start.
             phase = "first solution";
-            Start = (initial is null ? string.Empty : "the warm start failed; ") + $"first solution {settings.FirstSolution}";
+            Start = (initial is null ? string.Empty : "the warm start failed; ") + $"first solution {first}";
             solution = Solve(model, parameters, until, model.SolveWithParameters);
         }
 

@@ -9,7 +9,7 @@ public static class SharedOptions
 {
     public static Argument<string> Input() => new("input")
     {
-        Description = "A CSV job folder, an .xlsx workbook, a Solomon .txt file or a CVRPLIB .vrp file.",
+        Description = "A CSV job folder, an .xlsx workbook, a Solomon or Li & Lim .txt file or a CVRPLIB .vrp file.",
     };
 
     public static Option<string?> Objective() => OptionValues.Choice("--objective",

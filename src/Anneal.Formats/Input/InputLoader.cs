@@ -16,7 +16,7 @@ public static class InputLoader
         if (!File.Exists(path))
         {
             throw new InputException(new InputProblem(path, null, null, null,
-                "there is no file or folder at this path", Nearby(path) + "give the path of a CSV job folder, an .xlsx workbook, a Solomon .txt file or a CVRPLIB .vrp file"));
+                "there is no file or folder at this path", Nearby(path) + "give the path of a CSV job folder, an .xlsx workbook, a Solomon or Li & Lim .txt file or a CVRPLIB .vrp file"));
         }
 
         if (WorkbookReader.LooksLike(path))

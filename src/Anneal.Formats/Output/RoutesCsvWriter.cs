@@ -33,6 +33,22 @@ public static class RoutesCsvWriter
             csv.WriteField("load_" + dim);
         }
 
+        // Only jobs with pickups get what each stop hands over and takes on, and the pair; delivery-only files keep their shape.
+        if (instance.HasPickups)
+        {
+            foreach (var dim in instance.DimensionNames)
+            {
+                csv.WriteField("delivered_" + dim);
+            }
+
+            foreach (var dim in instance.DimensionNames)
+            {
+                csv.WriteField("collected_" + dim);
+            }
+
+            csv.WriteField("pair");
+        }
+
         csv.NextRecord();
         foreach (var route in evaluation.Routes)
         {
@@ -50,6 +66,7 @@ public static class RoutesCsvWriter
 
             Row(csv, v.Id, 0, "start", start.Id, start.Name, start.Address, string.Empty, string.Empty, instance.Units.Format(route.Metrics.Departure),
                 string.Empty, string.Empty, string.Empty, 0, 0, onBoard);
+            Handled(csv, instance, -1);
             for (int k = 0; k < route.Stops.Length; k++)
             {
                 int s = route.Stops[k];
@@ -58,12 +75,14 @@ public static class RoutesCsvWriter
                 Row(csv, v.Id, k + 1, "stop", stop.Id, stop.Name, stop.Address, instance.Units.Format(visit.Arrival), instance.Units.Format(visit.Start),
                     instance.Units.Format(visit.Departure), TimeText.Number(visit.Wait), TimeText.Number(visit.Late),
                     TimeText.Window(instance, WindowUsed(stop, visit.Arrival)), travel.Distance(from, s), travel.Duration(from, s), route.LoadAfter[k]);
+                Handled(csv, instance, s);
                 from = s;
             }
 
             int home = instance.DepotLocation(v.EndDepot);
             Row(csv, v.Id, route.Stops.Length + 1, "end", end.Id, end.Name, end.Address, instance.Units.Format(route.Metrics.Return), string.Empty, string.Empty,
-                string.Empty, string.Empty, string.Empty, travel.Distance(from, home), travel.Duration(from, home), new double[instance.DimensionCount]);
+                string.Empty, string.Empty, string.Empty, travel.Distance(from, home), travel.Duration(from, home), route.LoadAfter[^1]);
+            Handled(csv, instance, -1);
         }
 
         csv.Flush();
@@ -83,19 +102,49 @@ public static class RoutesCsvWriter
             csv.WriteField(TimeText.Amount(x));
         }
 
+    }
+
+    /// <summary>With pickups: what the stop receives and hands over per dimension, and its pair; empty on depot rows (stop -1).</summary>
+    private static void Handled(CsvHelper.CsvWriter csv, Instance instance, int stop)
+    {
+        if (instance.HasPickups)
+        {
+            for (int d = 0; d < instance.DimensionCount; d++)
+            {
+                csv.WriteField(stop < 0 ? string.Empty : TimeText.Amount(instance.Demand(stop, d)));
+            }
+
+            for (int d = 0; d < instance.DimensionCount; d++)
+            {
+                csv.WriteField(stop < 0 ? string.Empty : TimeText.Amount(instance.Pickup(stop, d)));
+            }
+
+            csv.WriteField(stop < 0 ? string.Empty : PairName(instance, stop));
+        }
+
         csv.NextRecord();
     }
 
-    /// <summary>The load on board when the vehicle leaves its depot: everything its route delivers.</summary>
+    /// <summary>"collection>delivery" for either stop of a pair (the same text on both rows), empty for a stop in none.</summary>
+    public static string PairName(Instance instance, int stop)
+    {
+        int partner = instance.Partner(stop);
+        if (partner < 0)
+        {
+            return string.Empty;
+        }
+
+        bool collection = instance.IsCollection(stop);
+        return instance.Stops[collection ? stop : partner].Id + ">" + instance.Stops[collection ? partner : stop].Id;
+    }
+
+    /// <summary>The load on board when the vehicle leaves its depot: every delivery of its route that comes from the depot.</summary>
     public static double[] Loaded(Instance instance, RouteEvaluation route)
     {
         var load = new double[instance.DimensionCount];
-        foreach (int s in route.Stops)
+        for (int d = 0; d < load.Length; d++)
         {
-            for (int d = 0; d < load.Length; d++)
-            {
-                load[d] += instance.Demand(s, d);
-            }
+            load[d] = RouteLoads.Departure(instance, route.Stops, d);
         }
 
         return load;

@@ -19,7 +19,10 @@ public sealed class BoundSolver : ISolver
     public string Name => "bound";
 
     /// <summary>A job without stops has nothing to bound; whether the relaxation admits a bound is known only once it is built (<see cref="Solve"/>).</summary>
-    public string? Declines(Instance instance) => instance.StopCount == 0 ? "the job has no stops" : null;
+    public string? Declines(Instance instance) =>
+        instance.StopCount == 0 ? "the job has no stops"
+        : instance.HasPickups ? "the job has pickups; the relaxation's capacity bounds count every load as leaving the depot, which would not be a valid bound"
+        : null;
 
     /// <summary>
     /// The proven facts the exact model may assume, from the bound's stages run for at most <paramref name="budget"/>:

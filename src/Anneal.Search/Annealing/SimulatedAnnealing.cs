@@ -28,7 +28,7 @@ public sealed class SimulatedAnnealing : SeededSearch
 
     public override string Name => "sa";
 
-    public override string? Declines(Instance instance) => null;
+    public override string? Declines(Instance instance) => PickupSupport.Declines(instance);
 
     protected override SolverResult SolveOnce(Instance instance, SolveOptions options, IProgress<TracePoint>? progress, CancellationToken cancel)
     {

@@ -29,7 +29,7 @@ public sealed class TabuSearch : SeededSearch
 
     public override string Name => "tabu";
 
-    public override string? Declines(Instance instance) => null;
+    public override string? Declines(Instance instance) => PickupSupport.Declines(instance);
 
     protected override SolverResult SolveOnce(Instance instance, SolveOptions options, IProgress<TracePoint>? progress, CancellationToken cancel)
     {
