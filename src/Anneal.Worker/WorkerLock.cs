@@ -36,7 +36,16 @@ public sealed class WorkerLock : IDisposable
     {
         try
         {
-            return new WorkerLock(new FileStream(path, FileMode.Open, FileAccess.ReadWrite, FileShare.None, 4096, FileOptions.DeleteOnClose));
+            var taken = new WorkerLock(new FileStream(path, FileMode.Open, FileAccess.ReadWrite, FileShare.None, 4096, FileOptions.DeleteOnClose));
+            if (!File.Exists(path))
+            {
+                // Its owner stopped cleanly between our open and our lock, deleting the file: what we hold is no
+                // dead worker's lock, and acting on it would remove a live record (its status file).
+                taken.Dispose();
+                return null;
+            }
+
+            return taken;
         }
         catch (Exception e) when (e is IOException or UnauthorizedAccessException)
         {

@@ -82,8 +82,10 @@ public sealed class WorkerTests : WorkerTest
             WorkerJobs.DropValid(Dir, jobs[k], 20 + k);
         }
 
-        using var a = WorkerProcess.Start(Dir, "--once", "--time", "0.5", "--solvers", "sa");
-        using var b = WorkerProcess.Start(Dir, "--once", "--time", "0.5", "--solvers", "sa");
+        // The construction alone ends by itself in milliseconds, so no clock decides how a job ends (a short sa budget
+        // left a job without a plan when a loaded machine starved the search past its budget and tolerance).
+        using var a = WorkerProcess.Start(Dir, "--once", "--time", "60", "--solvers", "insertion");
+        using var b = WorkerProcess.Start(Dir, "--once", "--time", "60", "--solvers", "insertion");
         // Ten jobs between two processes: a hang guard generous enough for a loaded machine, not a measurement.
         Assert.True(a.WaitForExit(120) == 0, a.Log);
         Assert.True(b.WaitForExit(120) == 0, b.Log);
