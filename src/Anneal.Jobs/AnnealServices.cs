@@ -25,6 +25,7 @@ public static class AnnealServices
         services.TryAddSingleton<JobRunner>();
         services.TryAddSingleton<RunWriter>();
         services.AddArtifact<RoutesCsvArtifact>();
+        services.AddArtifact<ChangesCsvArtifact>();
         services.AddArtifact<RoutesGeoJsonArtifact>();
         services.AddArtifact<SummaryJsonArtifact>();
         services.AddArtifact<TraceCsvArtifact>();

@@ -9,6 +9,8 @@ namespace Anneal.Jobs;
 /// <param name="Notes">What the run should say as a whole: solvers left out of the defaults, advice, the budget kept for writing.</param>
 public sealed record JobPlan(LoadedInput Input, Instance Instance, IReadOnlyList<ISolver> Solvers, SolveOptions Options, double Seconds, IReadOnlyList<string> Notes)
 {
+    /// <summary>The started day reduced to what is left to plan (then <see cref="Instance"/> is its residual instance); null when the run does not re-plan.</summary>
+    public Core.Replanning.ResidualDay? Replan { get; init; }
 
     public int Seed => Options.Seed;
 

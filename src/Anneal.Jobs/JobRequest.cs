@@ -33,4 +33,7 @@ public sealed record JobRequest
 
     /// <summary>Time of the budget gone before the run (start-up, reading the job).</summary>
     public TimeSpan Spent { get; init; }
+
+    /// <summary>Re-plan from a given plan (`--from`, `--now`, `--without`); null to plan from nothing.</summary>
+    public Replanning.ReplanInput? Replan { get; init; }
 }

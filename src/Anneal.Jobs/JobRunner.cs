@@ -18,6 +18,14 @@ public sealed class JobRunner(SolverCatalog catalog)
     {
         var objective = request.Objective ?? input.Settings.Objective ?? input.Instance.Objective;
         var instance = objective == input.Instance.Objective ? input.Instance : input.Instance.With(objective: objective);
+        Core.Replanning.ResidualDay? replan = null;
+        Core.Plans.Plan? start = null;
+        if (request.Replan is { } asked)
+        {
+            (replan, start) = Replanning.Replanner.Prepare(instance, asked);
+            instance = replan.Instance;
+        }
+
         var names = catalog.Resolve(request.Solvers, input.Settings.Solvers, instance);
         var solvers = new List<ISolver>(names.Count);
         foreach (var name in names)
@@ -53,13 +61,19 @@ public sealed class JobRunner(SolverCatalog catalog)
             TargetObjective = request.Target,
             Seed = request.Seed ?? input.Settings.Seed ?? 1,
             Threads = request.Threads,
+            StartPlan = start,
         };
-        return new JobPlan(input, instance, solvers, options, seconds, notes);
+        return new JobPlan(input, instance, solvers, options, seconds, notes) { Replan = replan };
     }
 
     /// <param name="progress">Receives (solver name, trace point) from every solver as it improves, on the solvers' threads.</param>
-    public JobRun Run(JobPlan plan, Action<string, TracePoint>? progress, CancellationToken cancel) =>
-        new(plan, RunCoordinator.Run(plan.Instance, plan.Solvers, plan.Options, progress, cancel, ResultJudge.Judge) with { Notes = plan.Notes });
+    public JobRun Run(JobPlan plan, Action<string, TracePoint>? progress, CancellationToken cancel)
+    {
+        Func<Anneal.Core.Model.Instance, SolverResult, JudgedResult> judge = plan.Options.StartPlan is { } start
+            ? new Replanning.WarmStartJudge(plan.Instance, start).Judge
+            : ResultJudge.Judge;
+        return new(plan, RunCoordinator.Run(plan.Instance, plan.Solvers, plan.Options, progress, cancel, judge) with { Notes = plan.Notes });
+    }
 
     public JobRun Run(LoadedInput input, JobRequest request, Action<string, TracePoint>? progress, CancellationToken cancel) =>
         Run(Prepare(input, request), progress, cancel);

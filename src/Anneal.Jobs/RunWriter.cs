@@ -1,5 +1,7 @@
 using Anneal.Core.Evaluation;
 using Anneal.Core.Model;
+using Anneal.Core.Replanning;
+using Anneal.Formats.Output;
 using Anneal.Core.Solving;
 using Anneal.Formats.Input;
 using Anneal.Formats.Output.Artifacts;
@@ -15,16 +17,32 @@ public sealed class RunWriter(IEnumerable<IRunArtifact> artifacts)
     public void Write(string folder, JobRun run, DateTimeOffset generatedAt)
     {
         var facts = new RunFacts(run.Plan.Seed, run.Plan.Seconds, run.Interrupted, generatedAt);
-        Write(folder, run.Input, run.Instance, run.Outcome.Best.Evaluation, run.Outcome, facts);
+        Write(folder, run.Input, run.Instance, run.Outcome.Best.Evaluation, run.Outcome, facts, run.Plan.Replan);
     }
 
     /// <param name="outcome">Null for a plan judged without a search (`evaluate`).</param>
-    public void Write(string folder, LoadedInput input, Instance instance, PlanEvaluation plan, RunOutcome? outcome, RunFacts facts)
+    /// <param name="replan">The residual day of a re-plan (then <paramref name="instance"/> is its residual instance); null otherwise.</param>
+    public void Write(string folder, LoadedInput input, Instance instance, PlanEvaluation plan, RunOutcome? outcome, RunFacts facts, ResidualDay? replan = null)
     {
-        var context = new RunContext(folder, input, instance, plan, outcome, RunSummary.For(input, instance, plan, outcome, facts));
+        var summary = RunSummary.For(input, instance, plan, outcome, facts);
+        var changes = replan is null ? null : DayChanges.Compute(replan, plan);
+        if (replan is not null && changes is not null)
+        {
+            summary = summary with { Changes = Describe(replan, changes) };
+        }
+
+        var context = new RunContext(folder, input, instance, plan, outcome, summary) { Replan = replan, Changes = changes };
         foreach (var artifact in _artifacts)
         {
             artifact.Write(context);
         }
+    }
+
+    public static ChangesSummary Describe(ResidualDay replan, DayChanges changes)
+    {
+        var job = replan.Day;
+        var without = replan.Fixed.Where(f => f.TakenOut).Select(f => job.Vehicles[f.Vehicle].Id).ToList();
+        return new ChangesSummary(replan.Request.Now is double now ? job.Units.Format(now) : null, without, replan.Fixed.Sum(f => f.Visits.Count),
+            changes.Added, changes.Cancelled, changes.Moved, changes.Retimed, changes.Summary(job.Units.TimeWords));
     }
 }

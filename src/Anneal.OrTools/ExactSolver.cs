@@ -55,7 +55,7 @@ public sealed class ExactSolver : ISolver
 
         // The best known plan, Anneal's construction, as a hint: CP-SAT starts from it, and it is the answer
         // should CP-SAT find nothing better in time.
-        if (_start?.Build(instance, cancel) is { } plan && keeper.Offer(plan, Keeper.HintState) is { Feasible: true })
+        if ((options.StartPlan ?? _start?.Build(instance, cancel)) is { } plan && keeper.Offer(plan, Keeper.HintState) is { Feasible: true })
         {
             exact.Hint(plan);
             CompleteHint(exact, options.TimeLimit - clock.Elapsed, cancel);

@@ -75,7 +75,7 @@ public sealed class OrToolsSolver : ISolver, ISolverAdvice
         budget.CancelAfter(limit);
 
         // Anneal's construction: the warm start, and the plan returned should OR-Tools never improve on it.
-        var warm = _start?.Build(instance, budget.Token);
+        var warm = options.StartPlan ?? _start?.Build(instance, budget.Token);
         bool warmFeasible = warm is not null && keeper.Offer(warm, "construction", countsAsSolution: false) && keeper.Best!.Feasible;
         double constructionSeconds = clock.Elapsed.TotalSeconds;
 

@@ -43,6 +43,11 @@ public static class OptionValues
     public static Option<int?> Seed(string name, string description) =>
         Parsed<int?>(name, description, "n", null, (string text, out int? v) => Ok(TryWhole(text, int.MinValue, int.MaxValue, out long w), (int)w, out v), "a whole number, e.g. 7");
 
+    /// <summary>A clock time of the job's day, HH:MM up to 47:59 (or minutes), e.g. `--now 11:20`.</summary>
+    public static Option<double?> Clock(string name, string description) =>
+        Parsed<double?>(name, description, "HH:MM", null, (string text, out double? v) => Ok(Anneal.Formats.Input.Csv.TimeText.TryParseTime(text, out double t), t, out v),
+            "a clock time HH:MM (up to 47:59), e.g. 11:20");
+
     /// <summary>Any finite number (an objective value).</summary>
     public static Option<double?> Number(string name, string description, string helpName) =>
         Parsed<double?>(name, description, helpName, null,

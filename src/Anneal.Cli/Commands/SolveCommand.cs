@@ -26,9 +26,12 @@ public static class SolveCommand
         var threads = OptionValues.Whole("--threads", "Independent searches per solver run in parallel. Default 1.", 1);
         var output = SharedOptions.Out("Output folder. Default: runs/<instance>-<yyyyMMdd-HHmmss> under the current folder.");
         var quiet = new Option<bool>("--quiet") { Description = "No progress lines while solving." };
+        var from = new Option<string?>("--from") { Description = "Start from this plan (a routes.csv of an earlier run, possibly edited): a warm start never worse than it, or with --now a re-plan of the rest of the day; writes changes.csv.", HelpName = "plan.csv" };
+        var now = OptionValues.Clock("--now", "With --from: the clock time of the job's day that fixes the past (stops started by then, or marked done, keep vehicle, order and times).");
+        var without = new Option<string?>("--without") { Description = "With --from: vehicle ids taken out (comma-separated); their unstarted stops go back into the pool.", HelpName = "list" };
         var command = new Command("solve", "Search for a good plan and write routes.csv, summary.json and trace.csv; exit 0 feasible, 3 infeasible, 130 interrupted.");
         command.Arguments.Add(input);
-        foreach (Option option in new Option[] { solvers, time, iterations, target, objective, seed, threads, output, quiet })
+        foreach (Option option in new Option[] { solvers, time, iterations, target, objective, seed, threads, output, quiet, from, now, without })
         {
             command.Options.Add(option);
         }
@@ -46,7 +49,16 @@ public static class SolveCommand
                 Threads = parse.GetValue(threads),
                 OutDir = parse.GetValue(output),
                 Quiet = parse.GetValue(quiet),
+                From = parse.GetValue(from),
+                Now = parse.GetValue(now),
+                Without = parse.GetValue(without),
             };
+            if (request.From is null && (request.Now is not null || request.Without is not null))
+            {
+                context.Err.WriteLine("anneal: --now and --without re-plan a given plan: add --from PLAN.csv (the routes.csv of the run to re-plan)");
+                return ExitCodes.InvalidInput;
+            }
+
             return Execute(InputLoader.Load(parse.GetValue(input)!), request, context);
         });
         return command;
@@ -114,6 +126,13 @@ public static class SolveCommand
         }
 
         PlanReport.Print(w, instance, best.Evaluation, run.Plan.Seconds);
+        if (run.Plan.Replan is { } day)
+        {
+            var changes = Anneal.Core.Replanning.DayChanges.Compute(day, best.Evaluation);
+            w.WriteLine((day.Request.Now is double at ? $"Re-planned from {day.Request.Plan.File} at {day.Day.Units.Format(at)}: " : $"Started from {day.Request.Plan.File}: ")
+                + changes.Summary(day.Day.Units.TimeWords) + " (changes.csv lists each)");
+        }
+
         w.WriteLine($"Written: {folder}");
         return run.Interrupted ? ExitCodes.Interrupted : best.Evaluation.Feasible ? ExitCodes.Success : ExitCodes.Infeasible;
     }

@@ -97,6 +97,7 @@ public static class PlanReport
         Add("overtime", b.Overtime);
         Add("duration excess", b.DurationExcess);
         Add("unserved", b.Unserved);
+        Add("stability", b.Stability);
         return parts.Count == 0 ? "nothing (every part is zero)" : string.Join(" + ", parts);
 
         void Add(string name, double value)

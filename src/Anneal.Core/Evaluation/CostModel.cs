@@ -48,10 +48,34 @@ public static class CostModel
     public static double UnservedViolation(Instance instance, int stop, in PenaltyWeights w) =>
         instance.MayDrop(stop) ? 0 : w.Unserved;
 
-    /// <summary>True when the measures break no hard rule.</summary>
+    /// <summary>
+    /// The stability price of serving <paramref name="stop"/> with <paramref name="vehicle"/>, starting service at
+    /// <paramref name="start"/>: the move price when the given plan had it on another vehicle, and the per-minute price
+    /// of the start's shift beyond the tolerance. Zero for a stop the given plan did not have (and outside a re-plan).
+    /// </summary>
+    public static double StopStability(Instance instance, int stop, int vehicle, double start)
+    {
+        var s = instance.Stops[stop];
+        var prices = instance.Rules.Stability;
+        double cost = 0;
+        if (s.PlannedVehicle >= 0 && s.PlannedVehicle != vehicle)
+        {
+            cost += prices.PerMove;
+        }
+
+        if (!double.IsNaN(s.PlannedStart))
+        {
+            double shift = Math.Abs(start - s.PlannedStart) - prices.ToleranceMinutes;
+            cost += shift > 0 ? shift * prices.PerMinute : 0;
+        }
+
+        return cost;
+    }
+
     /// <summary>Violations at or below this are rounding, not breaks.</summary>
     public const double FeasibilityTolerance = 1e-6;
 
+    /// <summary>True when the measures break no hard rule.</summary>
     public static bool RouteFeasible(Instance instance, in RouteMetrics m, double tolerance = FeasibilityTolerance)
     {
         if (m.StopCount == 0)

@@ -16,7 +16,10 @@ public sealed record CostBreakdown
     public double DurationExcess { get; init; }
     public double Unserved { get; init; }
 
-    public double Total => Fixed + Distance + Time + Vehicles + Lateness + Overload + Overtime + DurationExcess + Unserved;
+    /// <summary>The prices of changing the given plan of a re-plan (stops moved to another vehicle, starts moved beyond the tolerance).</summary>
+    public double Stability { get; init; }
+
+    public double Total => Fixed + Distance + Time + Vehicles + Lateness + Overload + Overtime + DurationExcess + Unserved + Stability;
 }
 
 /// <summary>A broken rule: which rule, where, by how much, in words.</summary>

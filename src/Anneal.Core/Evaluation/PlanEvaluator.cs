@@ -21,7 +21,7 @@ public static class PlanEvaluator
         var violations = new List<Violation>();
         var served = new bool[instance.StopCount];
         int stranded = 0;
-        double fixedCost = 0, distanceCost = 0, timeCost = 0, vehicles = 0, lateness = 0, overload = 0, overtime = 0, durationExcess = 0;
+        double stability = 0, fixedCost = 0, distanceCost = 0, timeCost = 0, vehicles = 0, lateness = 0, overload = 0, overtime = 0, durationExcess = 0;
         int dims = instance.DimensionCount;
 
         var costs = instance.Costs;
@@ -30,12 +30,15 @@ public static class PlanEvaluator
             var visits = new VisitTimes[route.Stops.Length];
             var m = RouteScheduler.Schedule(instance, route.Vehicle, route.Stops, visits);
             var loads = RouteLoads.After(instance, route.Stops);
-            foreach (int s in route.Stops)
+            double routeStability = 0;
+            for (int k = 0; k < route.Stops.Length; k++)
             {
-                served[s] = true;
+                served[route.Stops[k]] = true;
+                routeStability += CostModel.StopStability(instance, route.Stops[k], route.Vehicle, visits[k].Start);
             }
 
-            double objective = CostModel.RouteObjective(instance, route.Vehicle, m);
+            stability += routeStability;
+            double objective = CostModel.RouteObjective(instance, route.Vehicle, m) + routeStability;
             bool drivable = CostModel.RouteFeasible(instance, m, Tolerance);
             routes.Add(new RouteEvaluation(route.Vehicle, route.Stops, m, visits, loads, objective, drivable));
             foreach (int s in route.Stops)
@@ -116,6 +119,7 @@ public static class PlanEvaluator
             Overtime = overtime,
             DurationExcess = durationExcess,
             Unserved = unservedCost,
+            Stability = stability,
         };
         return new PlanEvaluation(routes, unserved, breakdown, violations) { Stranded = stranded };
     }

@@ -29,5 +29,8 @@ public sealed record RuleSet
     /// </summary>
     public Rule Unserved { get; init; } = Rule.HardRule;
 
+    /// <summary>Prices of changing a given plan (a re-plan's soft rule); they count only for stops with a planned vehicle or start.</summary>
+    public StabilityPrices Stability { get; init; } = StabilityPrices.Default;
+
     public static RuleSet AllHard { get; } = new();
 }

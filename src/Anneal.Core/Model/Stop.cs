@@ -42,4 +42,10 @@ public sealed record Stop
 
     /// <summary>Price of leaving the stop unserved; NaN means the rule set's default price.</summary>
     public double UnservedPenalty { get; init; } = double.NaN;
+
+    /// <summary>The vehicle (index into <see cref="Instance.Vehicles"/>) the given plan of a re-plan had it on; -1 when none.</summary>
+    public int PlannedVehicle { get; init; } = -1;
+
+    /// <summary>The start of service the given plan of a re-plan had; NaN when none.</summary>
+    public double PlannedStart { get; init; } = double.NaN;
 }

@@ -15,4 +15,11 @@ public sealed record SolveOptions
 
     /// <summary>Independent seeded searches run in parallel by one solver; the best is kept.</summary>
     public int Threads { get; init; } = 1;
+
+    /// <summary>
+    /// A plan to start from instead of a construction (a warm start, or the repaired plan of a re-plan); null to
+    /// construct one. Solvers that start from a plan take it as it is: the local searches load it, OR-Tools reads it
+    /// as its initial assignment and CP-SAT as its hint.
+    /// </summary>
+    public Plans.Plan? StartPlan { get; init; }
 }

@@ -86,6 +86,40 @@ public sealed class TravelTable
         return new TravelTable(DistanceRule.Matrix, x, y, 1.0, 1.0, distance, duration);
     }
 
+    /// <summary>
+    /// The same travel between a chosen list of this table's locations (entry i of the new table is location
+    /// <paramref name="locations"/>[i] here): the residual instance of a re-plan keeps every arc as it was.
+    /// </summary>
+    public TravelTable Subset(int[] locations)
+    {
+        int n = locations.Length;
+        var x = new double[n];
+        var y = new double[n];
+        for (int i = 0; i < n; i++)
+        {
+            x[i] = _x[locations[i]];
+            y[i] = _y[locations[i]];
+        }
+
+        if (!IsDense)
+        {
+            return new TravelTable(Rule, x, y, _timePerDistance, DetourFactor, null, null);
+        }
+
+        var dist = new double[n * n];
+        var dur = new double[n * n];
+        for (int i = 0; i < n; i++)
+        {
+            for (int j = 0; j < n; j++)
+            {
+                dist[(i * n) + j] = Distance(locations[i], locations[j]);
+                dur[(i * n) + j] = Duration(locations[i], locations[j]);
+            }
+        }
+
+        return new TravelTable(Rule, x, y, _timePerDistance, DetourFactor, dist, dur);
+    }
+
     private TravelTable Densify()
     {
         int n = _count;

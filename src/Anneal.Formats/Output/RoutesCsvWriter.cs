@@ -1,6 +1,7 @@
 using System.Globalization;
 using Anneal.Core.Evaluation;
 using Anneal.Core.Model;
+using Anneal.Core.Replanning;
 
 namespace Anneal.Formats.Output;
 
@@ -15,41 +16,24 @@ public static class RoutesCsvWriter
 
     /// <summary>The columns before the per-dimension loads, in order (the README documents each).</summary>
     public static IReadOnlyList<string> Columns { get; } =
-        ["vehicle", "sequence", "kind", "stop", "name", "address", "arrival", "start", "departure", "wait", "late", "window", "distance", "drive"];
+        ["vehicle", "sequence", "kind", "stop", "name", "address", "arrival", "start", "departure", "wait", "late", "window", "distance", "drive", "status"];
 
-    public static void Write(string path, Instance instance, PlanEvaluation evaluation) =>
-        AtomicFile.WriteText(path, writer => Write(writer, instance, evaluation));
+    public static void Write(string path, Instance instance, PlanEvaluation evaluation, ResidualDay? replan = null) =>
+        AtomicFile.WriteText(path, writer => Write(writer, instance, evaluation, replan));
 
-    public static void Write(TextWriter writer, Instance instance, PlanEvaluation evaluation)
+    /// <param name="replan">In a re-plan (<paramref name="instance"/> is then its residual instance): each vehicle's fixed
+    /// visits come first, as the given plan has them, then the rest of its route from where it continues.</param>
+    public static void Write(TextWriter writer, Instance instance, PlanEvaluation evaluation, ResidualDay? replan = null)
     {
         using var csv = CsvOutput.Open(writer);
-        foreach (var name in Columns)
+        Header(csv, replan?.Day ?? instance);
+        if (replan is not null)
         {
-            csv.WriteField(name);
+            DayRoutes.Write(csv, instance, evaluation, replan);
+            csv.Flush();
+            return;
         }
 
-        foreach (var dim in instance.DimensionNames)
-        {
-            csv.WriteField("load_" + dim);
-        }
-
-        // Only jobs with pickups get what each stop hands over and takes on, and the pair; delivery-only files keep their shape.
-        if (instance.HasPickups)
-        {
-            foreach (var dim in instance.DimensionNames)
-            {
-                csv.WriteField("delivered_" + dim);
-            }
-
-            foreach (var dim in instance.DimensionNames)
-            {
-                csv.WriteField("collected_" + dim);
-            }
-
-            csv.WriteField("pair");
-        }
-
-        csv.NextRecord();
         foreach (var route in evaluation.Routes)
         {
             if (route.Stops.Length == 0)
@@ -88,11 +72,46 @@ public static class RoutesCsvWriter
         csv.Flush();
     }
 
-    private static void Row(CsvHelper.CsvWriter csv, string vehicle, int sequence, string kind, string id, string name, string address, string arrival, string start,
-        string departure, string wait, string late, string window, double distance, double drive, double[] load)
+    private static void Header(CsvHelper.CsvWriter csv, Instance instance)
+    {
+        foreach (var name in Columns)
+        {
+            csv.WriteField(name);
+        }
+
+        foreach (var dim in instance.DimensionNames)
+        {
+            csv.WriteField("load_" + dim);
+        }
+
+        // Only jobs with pickups get what each stop hands over and takes on, and the pair; delivery-only files keep their shape.
+        if (instance.HasPickups)
+        {
+            foreach (var dim in instance.DimensionNames)
+            {
+                csv.WriteField("delivered_" + dim);
+            }
+
+            foreach (var dim in instance.DimensionNames)
+            {
+                csv.WriteField("collected_" + dim);
+            }
+
+            csv.WriteField("pair");
+        }
+
+        csv.NextRecord();
+    }
+
+    /// <summary>The `status` of a row still to be driven; a re-plan writes `done` and `in-progress` on its fixed rows.</summary>
+    public const string Planned = "planned";
+
+    /// <summary>A row up to its loads; <see cref="Handled"/> ends it.</summary>
+    internal static void Row(CsvHelper.CsvWriter csv, string vehicle, int sequence, string kind, string id, string name, string address, string arrival, string start,
+        string departure, string wait, string late, string window, double distance, double drive, double[] load, string status = Planned)
     {
         foreach (var field in new[] { vehicle, sequence.ToString(CultureInfo.InvariantCulture), kind, id, name, address, arrival, start, departure, wait, late, window,
-            TimeText.Number(distance), TimeText.Number(drive) })
+            TimeText.Number(distance), TimeText.Number(drive), status })
         {
             csv.WriteField(field);
         }
@@ -105,7 +124,7 @@ public static class RoutesCsvWriter
     }
 
     /// <summary>With pickups: what the stop receives and hands over per dimension, and its pair; empty on depot rows (stop -1).</summary>
-    private static void Handled(CsvHelper.CsvWriter csv, Instance instance, int stop)
+    internal static void Handled(CsvHelper.CsvWriter csv, Instance instance, int stop)
     {
         if (instance.HasPickups)
         {

@@ -19,7 +19,8 @@ public sealed record SummaryDocument(
     IReadOnlyList<string> Cautions,
     DateTimeOffset GeneratedAt,
     double? LowerBound = null,
-    IReadOnlyList<string>? Notes = null)
+    IReadOnlyList<string>? Notes = null,
+    ChangesSummary? Changes = null)
 {
     /// <summary>The version of Anneal that wrote the file.</summary>
     public string AnnealVersion { get; init; } = ToolVersion.Version;
@@ -53,7 +54,12 @@ public sealed record BreakdownSummary(
     double Overtime,
     double DurationExcess,
     double Unserved,
-    double Total);
+    double Total,
+    double Stability = 0);
+
+/// <summary>What a re-plan changed against its given plan (summary.json's `changes`; changes.csv lists each stop).</summary>
+/// <param name="Now">`--now` as a clock time; null for a warm start.</param>
+public sealed record ChangesSummary(string? Now, IReadOnlyList<string> Without, int Fixed, int Added, int Cancelled, int Moved, int Retimed, string Summary);
 
 public sealed record ViolationSummary(string Rule, bool Hard, string? Vehicle, string? Stop, double Amount, string Message);
 

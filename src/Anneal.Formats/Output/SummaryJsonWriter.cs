@@ -50,7 +50,7 @@ public static class SummaryJsonWriter
             evaluation.VehiclesUsed,
             evaluation.Feasible,
             unserved,
-            new BreakdownSummary(b.Fixed, b.Distance, b.Time, b.Vehicles, b.Lateness, b.Overload, b.Overtime, b.DurationExcess, b.Unserved, b.Total),
+            new BreakdownSummary(b.Fixed, b.Distance, b.Time, b.Vehicles, b.Lateness, b.Overload, b.Overtime, b.DurationExcess, b.Unserved, b.Total, b.Stability),
             violations,
             unservedStops);
     }

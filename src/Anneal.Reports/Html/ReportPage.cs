@@ -87,7 +87,7 @@ public static class ReportPage
         {
             ("vehicle fixed costs", b.Fixed), ("distance", b.Distance), ("driver time", b.Time), ("vehicles (count weight)", b.Vehicles),
             ("late arrivals", b.Lateness), ("overload", b.Overload), ("overtime", b.Overtime), ("over maximum duration", b.DurationExcess),
-            ("stops left out", b.Unserved),
+            ("stops left out", b.Unserved), ("changes to the given plan", b.Stability),
         })
         {
             if (Math.Abs(value) > 1e-9)

@@ -57,6 +57,7 @@ internal sealed record SettingsFile
         {
             var job = new JobSettings();
             var result = new SettingsFile();
+            var stability = StabilityPrices.Default;
             foreach (var (key, line, value) in Members(root, TopKeys, string.Empty))
             {
                 switch (key)
@@ -96,10 +97,13 @@ internal sealed record SettingsFile
                     case "rules":
                         result = result with { Rules = Rules(value, line) };
                         break;
+                    case "stability":
+                        stability = Stability(value, line);
+                        break;
                 }
             }
 
-            return result with { Job = job };
+            return result with { Job = job, Rules = result.Rules with { Stability = stability } };
         }
 
         private SettingsFile Travel(JsonTree travel, int line, SettingsFile result)
@@ -121,6 +125,37 @@ internal sealed record SettingsFile
             }
 
             return result;
+        }
+
+        private StabilityPrices Stability(JsonTree stability, int line)
+        {
+            var prices = StabilityPrices.Default;
+            if (!Object(stability, line, "stability"))
+            {
+                return prices;
+            }
+
+            foreach (var (key, keyLine, value) in Members(stability, SettingsKeys.Stability, "stability."))
+            {
+                var range = key == "toleranceMinutes" ? Limits.TimeOfDay : Limits.Price;
+                string meaning = key switch
+                {
+                    "pricePerMove" => "the price of a stop moved to another vehicle",
+                    "pricePerMinute" => "the price per minute a stop's start moves beyond the tolerance",
+                    _ => "the minutes a stop's start may move without a price",
+                };
+                if (Within(value, keyLine, "stability." + key, range, meaning) is double d)
+                {
+                    prices = key switch
+                    {
+                        "pricePerMove" => prices with { PerMove = d },
+                        "pricePerMinute" => prices with { PerMinute = d },
+                        _ => prices with { ToleranceMinutes = d },
+                    };
+                }
+            }
+
+            return prices;
         }
 
         private RuleSet Rules(JsonTree rules, int line)

@@ -10,7 +10,7 @@ internal static class VehiclesTable
     private const string CapacityPrefix = "capacity_";
 
     private static readonly string[] Known =
-        ["id", "count", "depot", "end_depot", "shift_start", "shift_end", "max_duration", "fixed_cost", "cost_per_km", "cost_per_hour", "equipment"];
+        ["id", "count", "depot", "end_depot", "shift_start", "shift_end", "max_duration", "fixed_cost", "cost_per_km", "cost_per_hour", "equipment", "available_from", "available_until"];
 
     /// <summary>Largest count accepted, so a typo cannot ask for millions of vehicle records.</summary>
     private const int MaxCount = 10_000;
@@ -67,6 +67,11 @@ internal static class VehiclesTable
             {
                 cells.Report("shift_end", cells.Text("shift_end"), $"the shift ends before it starts ({cells.Text("shift_start")})", "give shift_start no later than shift_end; a night shift may end after 24:00, e.g. 26:30");
             }
+
+            // A vehicle that joins late or leaves early (a breakdown, a driver gone home) narrows its shift; a re-plan
+            // takes a vehicle out once its available_until is past --now.
+            shiftStart = Math.Max(shiftStart, cells.Time("available_from", shiftStart));
+            shiftEnd = Math.Max(shiftStart, Math.Min(shiftEnd, cells.Time("available_until", shiftEnd)));
 
             ulong equipmentBits = 0;
             foreach (var item in cells.List("equipment"))

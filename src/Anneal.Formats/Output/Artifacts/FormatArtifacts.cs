@@ -5,7 +5,19 @@ namespace Anneal.Formats.Output.Artifacts;
 /// <summary>routes.csv.</summary>
 public sealed class RoutesCsvArtifact : IRunArtifact
 {
-    public void Write(RunContext run) => RoutesCsvWriter.Write(run.PathOf(RoutesCsvWriter.FileName), run.Instance, run.Plan);
+    public void Write(RunContext run) => RoutesCsvWriter.Write(run.PathOf(RoutesCsvWriter.FileName), run.Instance, run.Plan, run.Replan);
+}
+
+/// <summary>changes.csv, in a re-plan only.</summary>
+public sealed class ChangesCsvArtifact : IRunArtifact
+{
+    public void Write(RunContext run)
+    {
+        if (run is { Replan: { } day, Changes: { } changes })
+        {
+            ChangesCsvWriter.Write(run.PathOf(ChangesCsvWriter.FileName), day.Day, changes);
+        }
+    }
 }
 
 /// <summary>routes.geojson, for jobs whose places are in degrees (latitude and longitude) only.</summary>

@@ -11,6 +11,12 @@ namespace Anneal.Formats.Output.Artifacts;
 /// <param name="Outcome">Every solver's result; null for `evaluate`, which judges a given plan.</param>
 public sealed record RunContext(string Folder, LoadedInput Input, Instance Instance, PlanEvaluation Plan, RunOutcome? Outcome, SummaryDocument Summary)
 {
+    /// <summary>In a re-plan: the day reduced to what was left to plan (<see cref="Instance"/> is its residual instance); null otherwise.</summary>
+    public Core.Replanning.ResidualDay? Replan { get; init; }
+
+    /// <summary>In a re-plan: every stop changed against the given plan; null otherwise.</summary>
+    public Core.Replanning.DayChanges? Changes { get; init; }
+
     public string PathOf(string fileName) => System.IO.Path.Combine(Folder, fileName);
 }
 

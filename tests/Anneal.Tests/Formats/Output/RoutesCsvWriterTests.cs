@@ -20,7 +20,7 @@ public sealed class RoutesCsvWriterTests
         var lines = Lines(new Plan([new PlannedRoute(0, [0, 1]), new PlannedRoute(1, [2])]));
 
         Assert.Equal(1 + (2 + 2) + (1 + 2), lines.Length);
-        Assert.Equal("vehicle,sequence,kind,stop,name,address,arrival,start,departure,wait,late,window,distance,drive,load_kg,load_crates", lines[0]);
+        Assert.Equal("vehicle,sequence,kind,stop,name,address,arrival,start,departure,wait,late,window,distance,drive,status,load_kg,load_crates", lines[0]);
         Assert.Equal(["start", "stop", "stop", "end", "start", "stop", "end"], lines.Skip(1).Select(l => l.Split(',')[2]));
     }
 
@@ -34,10 +34,10 @@ public sealed class RoutesCsvWriterTests
         // Legs: depot to A 5 km (7.5 min), A to B 5 km, B back 10 km (15 min); the van leaves with A's 30 + B's 40 kg.
         var lines = Lines(new Plan([new PlannedRoute(0, [0, 1])]));
 
-        Assert.Equal("van-1,0,start,D,,,,,09:35,,,,0.00,0.00,70,2", lines[1]);
-        Assert.Equal("van-1,1,stop,A,,,09:43,09:43,09:53,0.00,0.00,09:00-10:00,5.00,7.50,40,1", lines[2]);
-        Assert.Equal("van-1,2,stop,B,,,10:00,10:00,10:05,0.00,0.00,10:00-11:00,5.00,7.50,0,0", lines[3]);
-        Assert.Equal("van-1,3,end,D,,,10:20,,,,,,10.00,15.00,0,0", lines[4]);
+        Assert.Equal("van-1,0,start,D,,,,,09:35,,,,0.00,0.00,planned,70,2", lines[1]);
+        Assert.Equal("van-1,1,stop,A,,,09:43,09:43,09:53,0.00,0.00,09:00-10:00,5.00,7.50,planned,40,1", lines[2]);
+        Assert.Equal("van-1,2,stop,B,,,10:00,10:00,10:05,0.00,0.00,10:00-11:00,5.00,7.50,planned,0,0", lines[3]);
+        Assert.Equal("van-1,3,end,D,,,10:20,,,,,,10.00,15.00,planned,0,0", lines[4]);
     }
 
     [Fact]
@@ -61,6 +61,6 @@ public sealed class RoutesCsvWriterTests
     {
         var lines = Lines(new Plan([new PlannedRoute(1, [2])]));
 
-        Assert.EndsWith(",any,5.00,7.50,0,0", lines[2], StringComparison.Ordinal);
+        Assert.EndsWith(",any,5.00,7.50,planned,0,0", lines[2], StringComparison.Ordinal);
     }
 }
