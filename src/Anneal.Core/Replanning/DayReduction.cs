@@ -208,6 +208,13 @@ public static class DayReduction
             residualIndex[dayVehicle[r]] = r;
         }
 
+        var residualStop = new int[day.StopCount];
+        Array.Fill(residualStop, -1);
+        for (int i = 0; i < dayStop.Length; i++)
+        {
+            residualStop[dayStop[i]] = i;
+        }
+
         var stops = new Stop[dayStop.Length];
         for (int i = 0; i < stops.Length; i++)
         {
@@ -243,6 +250,9 @@ public static class DayReduction
                 Needs = needs,
                 PlannedVehicle = old >= 0 ? residualIndex[old] : -1,
                 PlannedStart = oldStart[s],
+
+                // A delivery whose goods were collected before now is a plain delivery from where they are now.
+                CollectFrom = day.Stops[s].CollectFrom >= 0 ? residualStop[day.Stops[s].CollectFrom] : -1,
             };
         }
 
@@ -275,11 +285,14 @@ public static class DayReduction
 
             bool started = part.Visits.Count > 0;
             var capacity = (double[])vehicle.Capacity.Clone();
+            // The rest of the route starts loaded with what it delivers (as any route does), beside what the fixed
+            // visits collected: goods for a stop moved onto this vehicle are taken to be brought to it.
             foreach (var visit in part.Visits)
             {
-                for (int d = 0; d < dims; d++)
+                var pickup = day.Stops[visit.Stop].Pickup;
+                for (int d = 0; d < dims && d < pickup.Length; d++)
                 {
-                    capacity[d] = Math.Max(0, capacity[d] - day.Demand(visit.Stop, d));
+                    capacity[d] = Math.Max(0, capacity[d] - pickup[d]);
                 }
             }
 

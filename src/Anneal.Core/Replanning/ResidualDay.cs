@@ -12,7 +12,7 @@ public sealed record FixedPart(int Vehicle, IReadOnlyList<GivenVisit> Visits, in
 
 /// <summary>
 /// A started day reduced to what is left to plan. <see cref="Instance"/> holds the stops not yet fixed and the
-/// vehicles still out, each starting where and when it continues, with the room left on board and its fixed cost
+/// vehicles still out, each starting where and when it continues, with its capacity for the rest of its route and its fixed cost
 /// already paid when it has started; every solver plans it as any other instance. <see cref="Start"/> is the given
 /// plan's unstarted part on it, with new stops and those of vehicles taken out unserved (the search repairs it).
 /// </summary>

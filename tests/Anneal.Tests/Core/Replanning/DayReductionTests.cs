@@ -41,10 +41,11 @@ public class DayReductionTests
         Assert.Equal(30, day.Fixed[1].ContinueAt);
         Assert.Equal(2, day.Fixed[1].ContinueLocation);
 
-        // Left to plan: s40 only, on B's rest of route; B has 99 of its 100 left and its fixed cost is paid.
+        // Left to plan: s40 only, on B's rest of route; B's room is its whole capacity (the rest of a route starts loaded
+        // with what it delivers, and s30 collected nothing) and its fixed cost is paid.
         Assert.Equal(["s40"], day.Instance.Stops.Select(s => s.Id));
         var b = day.Instance.Vehicles[day.ResidualVehicle(1)];
-        Assert.Equal(99, b.Capacity[0]);
+        Assert.Equal(100, b.Capacity[0]);
         Assert.Equal(30, b.ShiftStart);
         Assert.Equal(0, day.Instance.Vehicles[day.ResidualVehicle(0)].FixedCost);
         Assert.Equal([0], day.Start.Routes.Single().Stops);
