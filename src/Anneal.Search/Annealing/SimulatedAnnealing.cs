@@ -183,7 +183,7 @@ public sealed class SimulatedAnnealing : SeededSearch
     }
 
     private static TracePoint Point(Budget budget, long iteration, BestKeeper keeper, SearchState state, string note) =>
-        new(budget.Elapsed, iteration, keeper.Objective, state.CurrentObjective, keeper.HasFeasible, note);
+        new(budget.Elapsed, iteration, keeper.Objective, state.Objective, keeper.HasFeasible, note);
 
     /// <summary>
     /// Temperature at which the median worsening move of the starting plan is accepted with the given probability.

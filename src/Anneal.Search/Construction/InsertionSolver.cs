@@ -18,7 +18,7 @@ public sealed class InsertionSolver : ISolver
         var clock = Stopwatch.StartNew();
         var state = Build(instance, new CandidateLists(instance, 30), cancel);
         double seconds = clock.Elapsed.TotalSeconds;
-        var point = new TracePoint(seconds, 0, state.Objective(), state.Objective(), state.Feasible, "construction");
+        var point = new TracePoint(seconds, 0, state.Objective, state.Objective, state.Feasible, "construction");
         progress?.Report(point);
         return new SolverResult(Name, state.ToPlan(), seconds, seconds, [point], cancel.IsCancellationRequested ? SolverStatus.Interrupted : SolverStatus.Completed);
     }

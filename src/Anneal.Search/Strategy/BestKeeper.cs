@@ -39,7 +39,7 @@ public sealed class BestKeeper
     {
         if (state.Feasible)
         {
-            double obj = state.CurrentObjective;
+            double obj = state.Objective;
             if (!HasFeasible || obj < Objective - 1e-9)
             {
                 HasFeasible = true;
@@ -48,10 +48,10 @@ public sealed class BestKeeper
                 return true;
             }
         }
-        else if (!HasFeasible && state.CurrentPenalized < _bestInfeasible - 1e-9)
+        else if (!HasFeasible && state.Penalized < _bestInfeasible - 1e-9)
         {
-            _bestInfeasible = state.CurrentPenalized;
-            Objective = state.CurrentObjective;
+            _bestInfeasible = state.Penalized;
+            Objective = state.Objective;
             _pending = true;
             return true;
         }

@@ -57,7 +57,7 @@ public static class FleetSqueeze
 
             lastSuccess = budget.Progress(iteration);
             phase.NewBest(state, lastSuccess);
-            trace.Improved(new TracePoint(budget.Elapsed, iteration, keeper.Objective, state.CurrentObjective, true, $"ejection pool: {state.UsedRoutes} routes"));
+            trace.Improved(new TracePoint(budget.Elapsed, iteration, keeper.Objective, state.Objective, true, $"ejection pool: {state.UsedRoutes} routes"));
         }
 
         keeper.BeforeReset(state);

@@ -71,11 +71,11 @@ public sealed class StringRuin
     /// </summary>
     public bool Attempt(double temperature)
     {
-        double before = _state.CurrentObjective;
+        double before = _state.Objective;
         Ruin();
         Recreate();
         double allowance = -temperature * Math.Log(1 - _rng.NextDouble());
-        bool kept = _state.Feasible && _state.CurrentObjective < before + allowance;
+        bool kept = _state.Feasible && _state.Objective < before + allowance;
         if (!kept)
         {
             Undo();

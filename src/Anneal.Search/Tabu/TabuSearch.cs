@@ -190,12 +190,12 @@ public sealed class TabuSearch : SeededSearch
         private long WorkPerIteration => Math.Max(1, (long)Math.Min(_n, _settings.MaxStopsPerIteration) * _k);
 
         private TracePoint Point(long iteration, string note) =>
-            new(_budget.Elapsed, iteration, Keeper.Objective, _state.CurrentObjective, Keeper.HasFeasible, note);
+            new(_budget.Elapsed, iteration, Keeper.Objective, _state.Objective, Keeper.HasFeasible, note);
 
         private bool SelectBest(int iteration, ref MoveDraft move, out MoveParts bestParts)
         {
             var w = _state.Weights;
-            double current = _state.CurrentObjective;
+            double current = _state.Objective;
             double bestObjective = Keeper.HasFeasible ? Keeper.Objective : double.PositiveInfinity;
             double diversification = DiversificationScale(iteration);
             bool holdFleet = _phase.HoldsFleet && Keeper.HasFeasible;
@@ -305,7 +305,7 @@ public sealed class TabuSearch : SeededSearch
         private double DiversificationScale(int iteration)
         {
             // λ · c(x) · sqrt(n·m) / iteration (Cordeau et al. 2001), with c(x) the route cost without vehicle weights.
-            double cost = _state.CurrentObjective;
+            double cost = _state.Objective;
             int used = _state.UsedRoutes;
             if (_instance.Objective == Objective.VehiclesThenDistance)
             {

@@ -50,13 +50,13 @@ public sealed class StringRuinTests
         var candidates = new CandidateLists(instance, 30);
         var state = InsertionSolver.Build(instance, candidates);
         var ruin = new StringRuin(state, candidates, new SearchRandom(2));
-        double start = state.CurrentObjective;
+        double start = state.Objective;
         double previous = start;
         for (int k = 0; k < 500; k++)
         {
             ruin.Attempt(0);
-            Assert.True(state.CurrentObjective <= previous + 1e-9);
-            previous = state.CurrentObjective;
+            Assert.True(state.Objective <= previous + 1e-9);
+            previous = state.Objective;
         }
 
         Assert.True(previous < start, "500 attempts improved nothing on the constructed plan");
@@ -89,8 +89,8 @@ public sealed class StringRuinTests
 
             var truth = PlanEvaluator.Evaluate(instance, state.ToPlan());
             Assert.True(truth.Feasible, string.Join("; ", truth.Violations.Where(v => v.Hard).Select(v => v.Message)));
-            Assert.True(Math.Abs(truth.Objective - state.CurrentObjective) <= 1e-6 * Math.Max(1, truth.Objective),
-                $"seed {seed} attempt {k}: running objective {state.CurrentObjective}, exact {truth.Objective}");
+            Assert.True(Math.Abs(truth.Objective - state.Objective) <= 1e-6 * Math.Max(1, truth.Objective),
+                $"seed {seed} attempt {k}: running objective {state.Objective}, exact {truth.Objective}");
             Assert.True(state.UsedRoutes <= usedBefore, "a route was opened");
             Assert.Equal(instance.StopCount, state.ToPlan().Routes.Sum(r => r.Stops.Length) + state.UnservedCount);
         }
