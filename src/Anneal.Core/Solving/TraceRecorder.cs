@@ -30,14 +30,11 @@ public sealed class TraceRecorder
         Add(point);
     }
 
-    /// <summary>Records a sample if enough time passed since the last one; cheap to call often.</summary>
-    public void Sample(double seconds, Func<TracePoint> make)
-    {
-        if (seconds - _lastSample >= _sampleEvery)
-        {
-            Add(make());
-        }
-    }
+    /// <summary>True when enough time passed since the last point for a sample; cheap to call often.</summary>
+    public bool SampleDue(double seconds) => seconds - _lastSample >= _sampleEvery;
+
+    /// <summary>Records a sample (call when <see cref="SampleDue"/> says so).</summary>
+    public void Sample(TracePoint point) => Add(point);
 
     private void Add(TracePoint point)
     {

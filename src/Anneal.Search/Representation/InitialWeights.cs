@@ -28,12 +28,7 @@ public static class InitialWeights
         double most = 0;
         for (int v = 0; v < instance.Vehicles.Count; v++)
         {
-            most = Math.Max(most, instance.Objective switch
-            {
-                Objective.VehiclesThenDistance => instance.VehicleWeight,
-                Objective.Cost => instance.Vehicles[v].FixedCost,
-                _ => 0,
-            });
+            most = Math.Max(most, instance.Costs.Rates(v).Fixed);
         }
 
         return most;

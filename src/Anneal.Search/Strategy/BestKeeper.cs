@@ -5,8 +5,9 @@ using Anneal.Search.Representation;
 namespace Anneal.Search.Strategy;
 
 /// <summary>
-/// Keeps the best plan seen: any feasible plan beats every infeasible one, then the lower objective.
-/// Copies lazily: while the current state is the best, the copy is made only before a move that might lose it.
+/// Keeps the best plan seen: any feasible plan beats every infeasible one, then the lower objective. Copies lazily:
+/// while the current state is the best, the copy is made only before a change that might lose it, which is why
+/// every change of the state goes through the keeper (<see cref="Apply"/>, <see cref="Reset"/>, <see cref="Restore"/>).
 /// </summary>
 public sealed class BestKeeper
 {
@@ -59,25 +60,50 @@ public sealed class BestKeeper
         return false;
     }
 
-    /// <summary>Call before applying a move: snapshots the best unless the move is certain to improve on it.</summary>
-    public void BeforeApply(SearchState state, in MoveEffect effect)
+    /// <summary>
+    /// Applies a move, first copying the best plan away unless the move is certain to improve on it (the state may
+    /// hold the best, and the move would lose it).
+    /// </summary>
+    public void Apply(SearchState state, ref MoveDraft move, in MoveEffect effect)
     {
-        if (!_pending)
+        if (_pending)
+        {
+            bool certainlyBetter = HasFeasible
+                ? effect.FeasibleAfter && effect.Objective < -1e-9
+                : effect.FeasibleAfter || effect.Penalized < -1e-9;
+            if (!certainlyBetter)
+            {
+                Snapshot(state);
+            }
+        }
+
+        state.Apply(ref move);
+    }
+
+    /// <summary>
+    /// Changes the state other than by one move (a ruin, an emptied route, a repair), first copying the best plan
+    /// away if the state holds it. A change of prices alone needs none of this.
+    /// </summary>
+    public void Reset<T>(SearchState state, T argument, Action<SearchState, T> change)
+    {
+        SnapshotIfHeld(state);
+        change(state, argument);
+    }
+
+    /// <summary>Puts the best plan back into the state (a restart from the best).</summary>
+    public void Restore(SearchState state)
+    {
+        SnapshotIfHeld(state);
+        if (_pending)
         {
             return;
         }
 
-        bool certainlyBetter = HasFeasible
-            ? effect.FeasibleAfter && effect.Objective < -1e-9
-            : effect.FeasibleAfter || effect.Penalized < -1e-9;
-        if (!certainlyBetter)
-        {
-            Snapshot(state);
-        }
+        state.Load(BestPlan(state));
+        _pending = true;
     }
 
-    /// <summary>Call before changing the state other than by a move (restart, weight change does not count).</summary>
-    public void BeforeReset(SearchState state)
+    private void SnapshotIfHeld(SearchState state)
     {
         if (_pending)
         {
@@ -109,17 +135,5 @@ public sealed class BestKeeper
         }
 
         return new Plan(routes);
-    }
-
-    /// <summary>Puts the best plan back into the state (restart from the best).</summary>
-    public void Restore(SearchState state)
-    {
-        if (_pending)
-        {
-            return;
-        }
-
-        state.Load(BestPlan(state));
-        _pending = true;
     }
 }

@@ -33,7 +33,6 @@ public static class FleetSqueeze
         double lastSuccess = budget.Progress(iteration);
         while (!Over(budget, iteration, end))
         {
-            keeper.BeforeReset(state);
             keeper.Restore(state);
             int route = RandomUsedRoute(state, rng);
             if (route < 0)
@@ -41,8 +40,7 @@ public static class FleetSqueeze
                 break;
             }
 
-            keeper.BeforeReset(state);
-            pool.Begin(route);
+            keeper.Reset(state, (pool, route), static (_, a) => a.pool.Begin(a.route));
             double limit = Math.Min(end, lastSuccess + patience);
             while (pool.Waiting > 0 && !Over(budget, iteration, limit))
             {
@@ -60,7 +58,6 @@ public static class FleetSqueeze
             trace.Improved(new TracePoint(budget.Elapsed, iteration, keeper.Objective, state.Objective, true, $"ejection pool: {state.UsedRoutes} routes"));
         }
 
-        keeper.BeforeReset(state);
         keeper.Restore(state);
         return iteration;
     }

@@ -9,12 +9,10 @@ public static class Restart
 {
     public static void FromBest(SearchState state, BestKeeper keeper, PenaltyAdapter adapter, bool eliminateRoute, Random rng)
     {
-        keeper.BeforeReset(state);
         keeper.Restore(state);
         if (eliminateRoute && keeper.HasFeasible)
         {
-            keeper.BeforeReset(state);
-            RouteElimination.EmptyAShortRoute(state, rng);
+            keeper.Reset(state, rng, EmptyAShortRoute);
         }
 
         state.SetWeights(adapter.Weights);
@@ -60,16 +58,15 @@ public static class Restart
     /// </summary>
     private static void NextAttempt(SearchState state, BestKeeper keeper, PenaltyAdapter adapter, int fewestRoutes, Random rng)
     {
-        keeper.BeforeReset(state);
         if (!state.Feasible || state.UsedRoutes > fewestRoutes)
         {
             keeper.Restore(state);
         }
 
+        // A feasible state was just offered (Repair), so the keeper has a feasible plan whenever the state is kept.
         if (keeper.HasFeasible)
         {
-            keeper.BeforeReset(state);
-            RouteElimination.EmptyAShortRoute(state, rng);
+            keeper.Reset(state, rng, EmptyAShortRoute);
         }
 
         state.SetWeights(adapter.Weights);
@@ -82,20 +79,24 @@ public static class Restart
     /// </summary>
     public static bool Repair(SearchState state, BestKeeper keeper, PenaltyAdapter adapter, CandidateLists candidates)
     {
-        keeper.BeforeReset(state);
-        if (state.UnservedCount > 0)
+        keeper.Reset(state, (adapter, candidates), static (s, a) =>
         {
-            var pool = new int[state.UnservedCount];
-            for (int k = 0; k < pool.Length; k++)
+            if (s.UnservedCount > 0)
             {
-                pool[k] = state.UnservedAt(k);
+                var pool = new int[s.UnservedCount];
+                for (int k = 0; k < pool.Length; k++)
+                {
+                    pool[k] = s.UnservedAt(k);
+                }
+
+                s.SetWeights(InitialWeights.ForConstruction(s.Instance));
+                CheapestInsertion.Run(s, a.candidates, pool);
             }
 
-            state.SetWeights(InitialWeights.ForConstruction(state.Instance));
-            CheapestInsertion.Run(state, candidates, pool);
-        }
-
-        state.SetWeights(adapter.Weights);
+            s.SetWeights(a.adapter.Weights);
+        });
         return keeper.Offer(state);
     }
+
+    private static void EmptyAShortRoute(SearchState state, Random rng) => RouteElimination.EmptyAShortRoute(state, rng);
 }

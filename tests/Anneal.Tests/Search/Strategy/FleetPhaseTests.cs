@@ -83,8 +83,7 @@ public class FleetPhaseTests
         state.SetWeights(adapter.Weights);
         int routesBefore = state.UsedRoutes;
 
-        keeper.BeforeReset(state);
-        Assert.True(RouteElimination.EmptyAShortRoute(state, new SearchRandom(1)));
+        keeper.Reset(state, new SearchRandom(1), static (s, rng) => Assert.True(RouteElimination.EmptyAShortRoute(s, rng)));
         Assert.True(state.UnservedCount > 0);
         Restart.Repair(state, keeper, adapter, candidates);
 
