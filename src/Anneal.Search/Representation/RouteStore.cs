@@ -8,12 +8,13 @@ namespace Anneal.Search.Representation;
 /// </summary>
 public sealed class RouteStore
 {
-    // Shared with the segment cache, which reads them in its hot loop; the outer arrays never change identity.
+    // Shared with the segment cache and the state's front, which read them in hot loops (one load less per read
+    // than going through the store); none of these arrays, nor the outer one of Stops, ever changes identity.
     internal readonly int[][] Stops;
     internal readonly int[] Lengths;
+    internal readonly int[] RouteOfStop;
+    internal readonly int[] PositionOfStop;
 
-    private readonly int[] _routeOf;
-    private readonly int[] _posOf;
     private readonly int[] _version;
     private readonly int[] _unserved;
     private readonly int[] _unservedIndex;
@@ -28,8 +29,8 @@ public sealed class RouteStore
             Stops[r] = new int[8];
         }
 
-        _routeOf = new int[stopCount];
-        _posOf = new int[stopCount];
+        RouteOfStop = new int[stopCount];
+        PositionOfStop = new int[stopCount];
         _version = new int[routeCount];
         _unserved = new int[stopCount];
         _unservedIndex = new int[stopCount];
@@ -37,9 +38,9 @@ public sealed class RouteStore
 
     public int RouteCount => Lengths.Length;
 
-    public int RouteOf(int stop) => _routeOf[stop];
+    public int RouteOf(int stop) => RouteOfStop[stop];
 
-    public int PositionOf(int stop) => _posOf[stop];
+    public int PositionOf(int stop) => PositionOfStop[stop];
 
     public int Length(int route) => Lengths[route];
 
@@ -55,7 +56,7 @@ public sealed class RouteStore
     public int UnservedAt(int index) => _unserved[index];
 
     /// <summary>Marks a stop as on no route (the caller takes it off its route).</summary>
-    internal void SetUnrouted(int stop, int marker = -1) => _routeOf[stop] = marker;
+    internal void SetUnrouted(int stop, int marker = -1) => RouteOfStop[stop] = marker;
 
     /// <summary>Adds a stop to the unserved pool, at its end.</summary>
     internal void AddUnserved(int stop)
@@ -127,8 +128,8 @@ public sealed class RouteStore
         int len = Lengths[route];
         for (int k = 0; k < len; k++)
         {
-            _routeOf[stops[k]] = route;
-            _posOf[stops[k]] = k;
+            RouteOfStop[stops[k]] = route;
+            PositionOfStop[stops[k]] = k;
         }
     }
 }

@@ -19,6 +19,12 @@ public sealed class SearchState
     private readonly int[] _scratch;
     private readonly int[] _scratchB;
 
+    // The store's arrays, read directly by the accessors below: move sampling calls them in its hot loop.
+    private readonly int[][] _stops;
+    private readonly int[] _lengths;
+    private readonly int[] _routeOf;
+    private readonly int[] _positionOf;
+
     public SearchState(Instance instance, PenaltyWeights weights)
     {
         Instance = instance;
@@ -28,6 +34,7 @@ public sealed class SearchState
         _cache = new SegmentCache(instance, _store);
         _costs = new RouteCosts(instance, _store, weights);
         _evaluator = new MoveEvaluator(instance, _store, _cache, _costs);
+        (_stops, _lengths, _routeOf, _positionOf) = (_store.Stops, _store.Lengths, _store.RouteOfStop, _store.PositionOfStop);
         _scratch = new int[StopCount + 1];
         _scratchB = new int[StopCount + 1];
         for (int i = 0; i < StopCount; i++)
@@ -48,18 +55,18 @@ public sealed class SearchState
 
     public PenaltyWeights Weights => _costs.Weights;
 
-    public int RouteOf(int stop) => _store.RouteOf(stop);
+    public int RouteOf(int stop) => _routeOf[stop];
 
     /// <summary>Changes every time the route changes; lets a search cache move evaluations per route pair.</summary>
     public int Version(int route) => _store.Version(route);
 
-    public int PositionOf(int stop) => _store.PositionOf(stop);
+    public int PositionOf(int stop) => _positionOf[stop];
 
-    public int Length(int route) => _store.Length(route);
+    public int Length(int route) => _lengths[route];
 
-    public int StopAt(int route, int position) => _store.StopAt(route, position);
+    public int StopAt(int route, int position) => _stops[route][position];
 
-    public ReadOnlySpan<int> Route(int route) => _store.Route(route);
+    public ReadOnlySpan<int> Route(int route) => _stops[route].AsSpan(0, _lengths[route]);
 
     public int UnservedCount => _store.UnservedCount;
 
