@@ -15,16 +15,22 @@ public static class CliApp
 
     public static int Run(string[] args, CliContext context)
     {
+        ParseResult? parsed = null;
         try
         {
             var root = BuildRoot(context);
-            var parsed = root.Parse(args);
+            parsed = root.Parse(args);
             var mistakes = UsageErrors.Describe(parsed);
             if (mistakes.Count > 0)
             {
                 foreach (var line in mistakes)
                 {
                     context.Err.WriteLine("anneal: " + line);
+                }
+
+                if (JsonOutput.Requested(parsed, args))
+                {
+                    JsonOutput.Write(context.Out, JsonOutput.Error(ExitCodes.InvalidInput, "the command line is not valid: " + string.Join("; ", mistakes)));
                 }
 
                 var command = parsed.CommandResult.Command;
@@ -45,17 +51,17 @@ public static class CliApp
         catch (InputException e)
         {
             ProblemPrinter.Print(context.Err, e.Problems);
-            return ExitCodes.InvalidInput;
+            return Failed(ExitCodes.InvalidInput, "the input is not valid", e.Problems);
         }
         catch (UnknownSolverException e)
         {
             context.Err.WriteLine("anneal: " + e.Message);
-            return ExitCodes.InvalidInput;
+            return Failed(ExitCodes.InvalidInput, e.Message);
         }
         catch (OutputException e)
         {
             context.Err.WriteLine("anneal: " + e.Message);
-            return ExitCodes.OutputFailed;
+            return Failed(ExitCodes.OutputFailed, e.Message);
         }
         catch (Exception e)
         {
@@ -65,7 +71,18 @@ public static class CliApp
                 context.Err.WriteLine(e.ToString());
             }
 
-            return ExitCodes.InternalError;
+            return Failed(ExitCodes.InternalError, "internal error: " + e.Message);
+        }
+
+        // With --json a failure is a document too, so a script always has one to read.
+        int Failed(int code, string error, IReadOnlyList<InputProblem>? problems = null)
+        {
+            if (JsonOutput.Requested(parsed, args))
+            {
+                JsonOutput.Write(context.Out, JsonOutput.Error(code, error, problems));
+            }
+
+            return code;
         }
     }
 

@@ -17,6 +17,9 @@ public sealed record CliContext(TextWriter Out, TextWriter Err)
 
     public Func<DateTime> Now { get; init; } = () => DateTime.Now;
 
+    /// <summary>With --json: where the command writes its one JSON document (stdout; its text then goes to stderr).</summary>
+    public TextWriter? Json { get; init; }
+
     /// <summary>Time since the process started, which `solve` counts against its budget; zero in tests (they share one process).</summary>
     public Func<TimeSpan> SinceStart { get; init; } = () => TimeSpan.Zero;
 

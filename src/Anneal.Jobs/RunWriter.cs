@@ -1,9 +1,9 @@
 using Anneal.Core.Evaluation;
 using Anneal.Core.Model;
 using Anneal.Core.Replanning;
-using Anneal.Formats.Output;
 using Anneal.Core.Solving;
 using Anneal.Formats.Input;
+using Anneal.Formats.Output;
 using Anneal.Formats.Output.Artifacts;
 
 namespace Anneal.Jobs;
@@ -14,15 +14,16 @@ public sealed class RunWriter(IEnumerable<IRunArtifact> artifacts)
     private readonly List<IRunArtifact> _artifacts = [.. artifacts];
 
     /// <summary>The chosen plan of a finished run.</summary>
-    public void Write(string folder, JobRun run, DateTimeOffset generatedAt)
+    /// <returns>summary.json's document as written.</returns>
+    public SummaryDocument Write(string folder, JobRun run, DateTimeOffset generatedAt)
     {
         var facts = new RunFacts(run.Plan.Seed, run.Plan.Seconds, run.Interrupted, generatedAt);
-        Write(folder, run.Input, run.Instance, run.Outcome.Best.Evaluation, run.Outcome, facts, run.Plan.Replan);
+        return Write(folder, run.Input, run.Instance, run.Outcome.Best.Evaluation, run.Outcome, facts, run.Plan.Replan);
     }
 
     /// <param name="outcome">Null for a plan judged without a search (`evaluate`).</param>
     /// <param name="replan">The residual day of a re-plan (then <paramref name="instance"/> is its residual instance); null otherwise.</param>
-    public void Write(string folder, LoadedInput input, Instance instance, PlanEvaluation plan, RunOutcome? outcome, RunFacts facts, ResidualDay? replan = null)
+    public SummaryDocument Write(string folder, LoadedInput input, Instance instance, PlanEvaluation plan, RunOutcome? outcome, RunFacts facts, ResidualDay? replan = null)
     {
         var summary = RunSummary.For(input, instance, plan, outcome, facts);
         var changes = replan is null ? null : DayChanges.Compute(replan, plan);
@@ -36,6 +37,8 @@ public sealed class RunWriter(IEnumerable<IRunArtifact> artifacts)
         {
             artifact.Write(context);
         }
+
+        return context.Summary;
     }
 
     public static ChangesSummary Describe(ResidualDay replan, DayChanges changes)

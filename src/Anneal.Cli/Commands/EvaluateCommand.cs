@@ -4,6 +4,7 @@ using Anneal.Jobs;
 using Anneal.Core.Evaluation;
 using Anneal.Core.Plans;
 using Anneal.Formats.Input;
+using Anneal.Formats.Output;
 using Anneal.Formats.Output.Artifacts;
 using Microsoft.Extensions.DependencyInjection;
 
@@ -23,17 +24,19 @@ public static class EvaluateCommand
         };
         var objective = SharedOptions.Objective();
         var output = SharedOptions.Out("Also write routes.csv and summary.json into this folder.");
+        var json = JsonOutput.Option();
         var command = new Command("evaluate", "Cost, breakdown and verdict of a given plan; exit 0 feasible, 3 infeasible, 2 bad input.");
         command.Arguments.Add(input);
         command.Options.Add(routes);
         command.Options.Add(objective);
         command.Options.Add(output);
+        command.Options.Add(json);
         command.SetAction(parse =>
         {
             var loaded = InputLoader.Load(parse.GetValue(input)!);
             var instance = SharedOptions.WithObjective(loaded, parse.GetValue(objective));
             var plan = RouteFileReader.Read(parse.GetValue(routes)!, instance);
-            return Execute(loaded with { Instance = instance }, plan, parse.GetValue(routes)!, parse.GetValue(output), context);
+            return Execute(loaded with { Instance = instance }, plan, parse.GetValue(routes)!, parse.GetValue(output), JsonOutput.For(context, parse.GetValue(json)));
         });
         return command;
     }
@@ -57,13 +60,26 @@ public static class EvaluateCommand
         var evaluation = PlanEvaluator.Evaluate(instance, plan);
         context.Out.WriteLine($"Evaluating {routesPath} on {InstanceDescription.Size(instance)}");
         PlanReport.Print(context.Out, instance, evaluation);
+        var facts = new RunFacts(null, null, false, context.Now().ToUniversalTime());
+        string? folder = null;
+        SummaryDocument summary;
         if (outDir is not null)
         {
-            string folder = OutputFolder.Create(outDir);
-            context.Services.GetRequiredService<RunWriter>().Write(folder, input, instance, evaluation, null, new RunFacts(null, null, false, context.Now().ToUniversalTime()));
+            folder = OutputFolder.Create(outDir);
+            summary = context.Services.GetRequiredService<RunWriter>().Write(folder, input, instance, evaluation, null, facts);
             context.Out.WriteLine($"Written: {folder}");
         }
+        else
+        {
+            summary = RunSummary.For(input, instance, evaluation, null, facts);
+        }
 
-        return evaluation.Feasible ? ExitCodes.Success : ExitCodes.Infeasible;
+        int code = evaluation.Feasible ? ExitCodes.Success : ExitCodes.Infeasible;
+        if (context.Json is not null)
+        {
+            JsonOutput.Write(context.Json, JsonOutput.Summary(summary, code, folder));
+        }
+
+        return code;
     }
 }

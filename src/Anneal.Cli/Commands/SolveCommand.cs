@@ -29,9 +29,10 @@ public static class SolveCommand
         var from = new Option<string?>("--from") { Description = "Start from this plan (a routes.csv of an earlier run, possibly edited): a warm start never worse than it, or with --now a re-plan of the rest of the day; writes changes.csv.", HelpName = "plan.csv" };
         var now = OptionValues.Clock("--now", "With --from: the clock time of the job's day that fixes the past (stops started by then, or marked done, keep vehicle, order and times).");
         var without = new Option<string?>("--without") { Description = "With --from: vehicle ids taken out (comma-separated); their unstarted stops go back into the pool.", HelpName = "list" };
+        var json = JsonOutput.Option();
         var command = new Command("solve", "Search for a good plan and write routes.csv, summary.json and trace.csv; exit 0 feasible, 3 infeasible, 130 interrupted.");
         command.Arguments.Add(input);
-        foreach (Option option in new Option[] { solvers, time, iterations, target, objective, seed, threads, output, quiet, from, now, without })
+        foreach (Option option in new Option[] { solvers, time, iterations, target, objective, seed, threads, output, quiet, from, now, without, json })
         {
             command.Options.Add(option);
         }
@@ -55,11 +56,17 @@ public static class SolveCommand
             };
             if (request.From is null && (request.Now is not null || request.Without is not null))
             {
-                context.Err.WriteLine("anneal: --now and --without re-plan a given plan: add --from PLAN.csv (the routes.csv of the run to re-plan)");
+                const string NeedsFrom = "--now and --without re-plan a given plan: add --from PLAN.csv (the routes.csv of the run to re-plan)";
+                context.Err.WriteLine("anneal: " + NeedsFrom);
+                if (parse.GetValue(json))
+                {
+                    JsonOutput.Write(context.Out, JsonOutput.Error(ExitCodes.InvalidInput, NeedsFrom));
+                }
+
                 return ExitCodes.InvalidInput;
             }
 
-            return Execute(InputLoader.Load(parse.GetValue(input)!), request, context);
+            return Execute(InputLoader.Load(parse.GetValue(input)!), request, JsonOutput.For(context, parse.GetValue(json)));
         });
         return command;
     }
@@ -75,6 +82,11 @@ public static class SolveCommand
         catch (UnknownSolverException e)
         {
             context.Err.WriteLine("anneal: " + e.Message);
+            if (context.Json is not null)
+            {
+                JsonOutput.Write(context.Json, JsonOutput.Error(ExitCodes.InvalidInput, e.Message));
+            }
+
             return ExitCodes.InvalidInput;
         }
 
@@ -110,7 +122,7 @@ public static class SolveCommand
         progress?.Finish();
 
         var best = run.Outcome.Best;
-        context.Services.GetRequiredService<RunWriter>().Write(folder, run, context.Now().ToUniversalTime());
+        var summary = context.Services.GetRequiredService<RunWriter>().Write(folder, run, context.Now().ToUniversalTime());
 
         var w = context.Out;
         if (run.Interrupted)
@@ -134,7 +146,13 @@ public static class SolveCommand
         }
 
         w.WriteLine($"Written: {folder}");
-        return run.Interrupted ? ExitCodes.Interrupted : best.Evaluation.Feasible ? ExitCodes.Success : ExitCodes.Infeasible;
+        int code = run.Interrupted ? ExitCodes.Interrupted : best.Evaluation.Feasible ? ExitCodes.Success : ExitCodes.Infeasible;
+        if (context.Json is not null)
+        {
+            JsonOutput.Write(context.Json, JsonOutput.Summary(summary, code, folder));
+        }
+
+        return code;
     }
 
     /// <summary>How far the written plan can be from optimal, when a solver proved a bound and the plan keeps the hard rules.</summary>
