@@ -29,6 +29,8 @@ public static class JobScreen
             found.Add(new Obstacle(f.Rule, f.StopId, f.Message));
         }
 
+        PairScreen.Screen(instance, found);
+
         return found;
     }
 
@@ -117,7 +119,10 @@ public static class JobScreen
         }
     }
 
-    /// <summary>Summed demand in dimension <paramref name="d"/> of the stops that must be served and need every item in <paramref name="needs"/>.</summary>
+    /// <summary>
+    /// Summed demand in dimension <paramref name="d"/> of the stops that must be served and need every item in
+    /// <paramref name="needs"/>: what leaves the depot (a pair's delivery is loaded on the way, so it does not count).
+    /// </summary>
     private static (double Demand, int Stops) Demand(Instance instance, int d, ulong needs)
     {
         double total = 0;
@@ -127,7 +132,7 @@ public static class JobScreen
             var stop = instance.Stops[s];
             if (!stop.Optional && (stop.Needs & needs) == needs)
             {
-                total += instance.Demand(s, d);
+                total += instance.DepotLoad(s, d);
                 count++;
             }
         }

@@ -9,18 +9,21 @@ internal static class StopsTable
 
     private const string DemandPrefix = "demand_";
 
-    private static readonly string[] Known = ["id", "name", "address", .. Coordinates.Columns, "service", "windows", "needs", "optional", "penalty"];
+    private const string PickupPrefix = "pickup_";
+
+    private static readonly string[] Known = ["id", "name", "address", .. Coordinates.Columns, "service", "windows", "needs", "optional", "penalty", PairLinks.Column];
 
     /// <param name="dimensions">The job's dimensions from vehicles.csv; null when vehicles.csv could not be read.</param>
     /// <param name="vehicleEquipment">Equipment some vehicle carries; null when vehicles.csv could not be read.</param>
     public static (List<Stop> Stops, IdRegistry Ids, CoordinateSystem System) Read(
         CsvTable table, IReadOnlyList<string>? dimensions, IReadOnlySet<string>? vehicleEquipment, EquipmentIndex equipment, ProblemList problems)
     {
-        HeaderCheck.Check(table, Known, [DemandPrefix], problems);
+        HeaderCheck.Check(table, Known, [DemandPrefix, PickupPrefix], problems);
         bool hasId = HeaderCheck.Require(table, "id", "a unique name per stop", problems);
         var system = Coordinates.Detect(table, problems);
-        var demandColumn = DemandColumns(table, dimensions ?? [], dimensions is not null, problems);
-
+        var demandColumn = DemandColumns(table, DemandPrefix, dimensions ?? [], dimensions is not null, problems);
+        var pickupColumn = DemandColumns(table, PickupPrefix, dimensions ?? [], dimensions is not null, problems);
+        var links = new List<(CsvRow Row, int Stop, string Partner)>();
         var stops = new List<Stop>();
         var ids = new IdRegistry();
         foreach (var row in table.Rows)
@@ -44,6 +47,21 @@ internal static class StopsTable
                 }
             }
 
+            var pickup = new double[dimensions?.Count ?? 0];
+            foreach (var (column, d) in pickupColumn)
+            {
+                double value = cells.Number(column, 0, Limits.Quantity, "the amount collected");
+                if (d >= 0)
+                {
+                    pickup[d] = value;
+                }
+            }
+
+            if (cells.Text(PairLinks.Column) is { Length: > 0 } partner)
+            {
+                links.Add((row, stops.Count, partner));
+            }
+
             ulong needs = 0;
             foreach (var item in cells.List("needs"))
             {
@@ -65,6 +83,7 @@ internal static class StopsTable
                 X = x,
                 Y = y,
                 Demand = demand,
+                Pickup = pickup,
                 ServiceTime = cells.Duration("service", 0, Limits.Service, "the service time"),
                 Windows = WindowText.Read(cells, "windows"),
                 Needs = needs,
@@ -78,14 +97,15 @@ internal static class StopsTable
             problems.Add(table, null, null, null, "no stops", "add at least one stop line under the header");
         }
 
+        PairLinks.Resolve(table, stops, ids, links, dimensions ?? [], problems);
         return (stops, ids, system);
     }
 
-    /// <summary>Each demand column with its dimension index (-1 when vehicles.csv has no such capacity).</summary>
-    private static List<(string Column, int Dimension)> DemandColumns(CsvTable table, IReadOnlyList<string> dimensions, bool check, ProblemList problems)
+    /// <summary>Each demand (or pickup) column with its dimension index (-1 when vehicles.csv has no such capacity).</summary>
+    private static List<(string Column, int Dimension)> DemandColumns(CsvTable table, string prefix, IReadOnlyList<string> dimensions, bool check, ProblemList problems)
     {
         var columns = new List<(string, int)>();
-        foreach (var (index, name) in HeaderCheck.Family(table, DemandPrefix))
+        foreach (var (index, name) in HeaderCheck.Family(table, prefix))
         {
             int d = -1;
             for (int k = 0; k < dimensions.Count; k++)
@@ -101,7 +121,7 @@ internal static class StopsTable
             {
                 var near = Closest.Find(name, dimensions);
                 problems.Add(table, 1, table.Header[index], null, $"no vehicle capacity for dimension '{name}' ({table.Names.Vehicles} has no capacity_{name} column)",
-                    near is not null ? $"did you mean demand_{near}? Or add capacity_{name} to {table.Names.Vehicles}" : $"add a capacity_{name} column to {table.Names.Vehicles}");
+                    near is not null ? $"did you mean {prefix}{near}? Or add capacity_{name} to {table.Names.Vehicles}" : $"add a capacity_{name} column to {table.Names.Vehicles}");
             }
         }
 
