@@ -103,6 +103,7 @@ public static class CliApp
         root.Subcommands.Add(BenchCommand.Create(context));
         root.Subcommands.Add(PlotCommand.Create(context));
         root.Subcommands.Add(WorkerCommand.Create(context));
+        root.Subcommands.Add(RunJobCommand.Create(context));
         root.Subcommands.Add(Commands.Queue.QueueCommand.Create(context));
         return root;
     }

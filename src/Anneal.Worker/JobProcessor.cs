@@ -2,6 +2,7 @@ using Anneal.Formats.Input;
 using Anneal.Formats.Output;
 using Anneal.Jobs;
 using Anneal.Core.Solving;
+using Anneal.Worker.Isolation;
 using Anneal.Worker.Untrusted;
 using Microsoft.Extensions.Logging;
 
@@ -9,7 +10,7 @@ namespace Anneal.Worker;
 
 /// <summary>Solves one claimed job and leaves it in exactly one place: the outbox, failed/, or back in the inbox.</summary>
 public sealed class JobProcessor(
-    WorkerOptions options, WorkerFolders folders, string workerId, JobClaimer claimer, JobRunner runner, RunWriter writer, ILogger log, TimeProvider clock)
+    WorkerOptions options, WorkerFolders folders, string workerId, JobClaimer claimer, JobRunner runner, RunWriter writer, ChildRun child, ILogger log, TimeProvider clock)
 {
     public (JobResult Result, string Where) Process(ClaimedJob job, JobProgress progress, CancellationToken stop)
     {
@@ -31,7 +32,7 @@ public sealed class JobProcessor(
         }
         catch (Exception e) when (e is not OperationCanceledException)
         {
-            return GiveBack(job, e);
+            return GiveBack(job, e is OutputException ? e.Message : $"{e.GetType().Name}: {e.Message}");
         }
         finally
         {
@@ -41,18 +42,20 @@ public sealed class JobProcessor(
 
     private (JobResult, string) Solve(ClaimedJob job, JobProgress progress, CancellationToken stop)
     {
-        var input = InputLoader.Load(JobInput.Locate(job, new UnpackLimits(options.MaxZipBytes, options.MaxZipRatio)));
+        string located = JobInput.Locate(job, new UnpackLimits(options.MaxZipBytes, options.MaxZipRatio));
+        var input = InputLoader.Load(located);
+        var request = new JobRequest
+        {
+            Solvers = string.IsNullOrWhiteSpace(options.Solvers) ? null : options.Solvers,
+            DefaultTimeSeconds = options.TimeSeconds,
+            Threads = options.ThreadsPerJob,
+            WholeRun = true,
+            Spent = clock.GetUtcNow() - job.ClaimedAt,
+        };
         JobPlan plan;
         try
         {
-            plan = runner.Prepare(input, new JobRequest
-            {
-                Solvers = string.IsNullOrWhiteSpace(options.Solvers) ? null : options.Solvers,
-                DefaultTimeSeconds = options.TimeSeconds,
-                Threads = options.ThreadsPerJob,
-                WholeRun = true,
-                Spent = clock.GetUtcNow() - job.ClaimedAt,
-            });
+            plan = runner.Prepare(input, request);
         }
         catch (UnknownSolverException e)
         {
@@ -64,8 +67,9 @@ public sealed class JobProcessor(
             return (JobResult.Requeued, claimer.Return(job.Path, job.Entry));
         }
 
-        log.LogInformation("Job {JobId} started (attempt {Attempt}): {Stops} stops, solvers {Solvers}, up to {Budget:0.#} s",
-            job.Id, job.Attempt, plan.Instance.StopCount, string.Join(",", plan.SolverNames), plan.Seconds);
+        log.LogInformation("Job {JobId} started (attempt {Attempt}): {Stops} stops, solvers {Solvers}, up to {Budget:0.#} s{Where}",
+            job.Id, job.Attempt, plan.Instance.StopCount, string.Join(",", plan.SolverNames), plan.Seconds,
+            options.Isolation == SolverIsolation.Process ? " in its own process" : string.Empty);
         foreach (var note in plan.Notes)
         {
             log.LogInformation("Job {JobId}: {Note}", job.Id, note);
@@ -76,28 +80,42 @@ public sealed class JobProcessor(
             log.LogWarning("Job {JobId}: {Warning}", job.Id, crowded);
         }
 
-        var run = runner.Run(plan, progress.Report, stop);
-        bool interrupted = run.Interrupted;
-        bool requeue = interrupted && options.OnShutdown == ShutdownChoice.Requeue;
-
-        var now = clock.GetUtcNow();
-        var best = run.Outcome.Best;
         string? partial = null;
         string published;
+        ChildResult best;
+        bool requeue;
+        DateTimeOffset now;
         try
         {
             partial = Publisher.NewPartial(folders.Outbox, workerId, job.Id);
-            writer.Write(partial, run, now);
-            new JobRecord(job.Id, job.Entry.Name, workerId, job.Attempt, job.ClaimedAt, now, interrupted, Final: !requeue).Write(partial);
+            var outcome = options.Isolation == SolverIsolation.Process
+                ? InChild(job, located, partial, request, plan, progress, stop)
+                : InProcess(plan, partial, progress, stop);
+            switch (outcome)
+            {
+                case ChildOutcome.Failed failed:
+                    Entries.TryDelete(partial);
+                    return SolverFailed(job, failed.Reason);
+                case ChildOutcome.NoSpace full:
+                    return NoSpace(job, partial, full.Reason);
+                case ChildOutcome.Stopped:
+                    Entries.TryDelete(partial);
+                    return (JobResult.Requeued, claimer.Return(job.Path, job.Entry));
+            }
+
+            best = ((ChildOutcome.Completed)outcome).Result;
+            requeue = best.Interrupted && options.OnShutdown == ShutdownChoice.Requeue;
+            now = clock.GetUtcNow();
+            new JobRecord(job.Id, job.Entry.Name, workerId, job.Attempt, job.ClaimedAt, now, best.Interrupted, Final: !requeue).Write(partial);
             published = Publisher.Publish(partial, folders.Outbox, job.Id, workerId);
         }
         catch (Exception e) when (DiskFull.Is(e))
         {
-            return NoSpace(job, partial, e);
+            return NoSpace(job, partial, e.Message);
         }
 
         // Only now is the input let go: a crash before this line leaves it in working/ for recovery, which sees job.json.
-        var result = JobResult.Solved;
+        JobResult result;
         if (requeue)
         {
             claimer.Return(job.Path, job.Entry);
@@ -106,18 +124,35 @@ public sealed class JobProcessor(
         else
         {
             DropInput(job);
-            result = interrupted ? JobResult.Interrupted : JobResult.Solved;
+            result = best.Interrupted ? JobResult.Interrupted : JobResult.Solved;
         }
 
         log.LogInformation("Job {JobId} {Outcome}: {Solver} objective {BestObjective:F2} ({Feasibility}), {Vehicles} vehicles, after {Elapsed:F1} s; written to {Folder}",
             job.Id, result switch { JobResult.Solved => "solved", JobResult.Interrupted => "interrupted (kept as its result)", _ => "interrupted (plan written, job requeued)" },
-            best.Result.Solver, best.Evaluation.Objective, best.Evaluation.Feasible ? "feasible" : "infeasible", best.Evaluation.VehiclesUsed,
-            (now - job.ClaimedAt).TotalSeconds, published);
+            best.Solver, best.Objective, best.Feasible ? "feasible" : "infeasible", best.Vehicles, (now - job.ClaimedAt).TotalSeconds, published);
         return (result, published);
     }
 
+    /// <summary>The search in this process (Isolation: InProcess): a native crash here ends the worker.</summary>
+    private ChildOutcome InProcess(JobPlan plan, string partial, JobProgress progress, CancellationToken stop)
+    {
+        var run = runner.Run(plan, progress.Report, stop);
+        writer.Write(partial, run, clock.GetUtcNow());
+        var best = run.Outcome.Best;
+        return new ChildOutcome.Completed(new ChildResult(run.Interrupted, best.Result.Solver, best.Evaluation.Objective, best.Evaluation.Feasible, best.Evaluation.VehiclesUsed));
+    }
+
+    /// <summary>The search in its own process (Isolation: Process, the default): its crash, kill or hang is this job's failure only.</summary>
+    private ChildOutcome InChild(ClaimedJob job, string located, string partial, JobRequest request, JobPlan plan, JobProgress progress, CancellationToken stop)
+    {
+        // A search that has not ended a generous while after its budget is taken to hang.
+        var deadline = TimeSpan.FromSeconds(plan.Seconds + Math.Max(30, plan.Seconds / 4));
+        return child.Run(ChildSide.Arguments(Path.GetFullPath(located), partial, request, job.ClaimedAt), deadline,
+            TimeSpan.FromSeconds(options.ShutdownTimeoutSeconds), progress.Report, stop);
+    }
+
     /// <summary>The outbox is full: nothing half-written stays, and the job goes back as it was, with no attempt counted.</summary>
-    private (JobResult, string) NoSpace(ClaimedJob job, string? partial, Exception e)
+    private (JobResult, string) NoSpace(ClaimedJob job, string? partial, string reason)
     {
         if (partial is not null)
         {
@@ -126,7 +161,7 @@ public sealed class JobProcessor(
 
         string back = claimer.Return(job.Path, job.Entry);
         log.LogError("Job {JobId}: the outbox has no space left ({Reason}); its plan was not published, and it is back in the inbox as {Entry} with no attempt counted",
-            job.Id, e.Message, Path.GetFileName(back));
+            job.Id, reason, Path.GetFileName(back));
         return (JobResult.NoSpace, back);
     }
 
@@ -143,10 +178,21 @@ public sealed class JobProcessor(
         }
     }
 
-    /// <summary>An unexpected error: the job goes back with one more retry counted, or to failed/ when they are spent.</summary>
-    private (JobResult, string) GiveBack(ClaimedJob job, Exception e)
+    /// <summary>
+    /// The solver process crashed, was killed or hung: the same input would do it again, so the job goes to failed/ at
+    /// once with the reason instead of costing its retries (and their budgets).
+    /// </summary>
+    private (JobResult, string) SolverFailed(ClaimedJob job, string reason)
     {
-        string reason = e is OutputException ? e.Message : $"{e.GetType().Name}: {e.Message}";
+        string folder = FailedJobs.Move(folders, workerId, job, $"Job '{job.Id}' could not be solved: {reason}.",
+            ["The worker went on with the next job. If the input is sound, tell the maintainers what the job holds; the other solvers may still solve it (\"solvers\" in settings.json)."]);
+        log.LogError("Job {JobId} failed in its solver process: {Reason}; moved to {Folder}", job.Id, reason, folder);
+        return (JobResult.Failed, folder);
+    }
+
+    /// <summary>An unexpected error: the job goes back with one more retry counted, or to failed/ when they are spent.</summary>
+    private (JobResult, string) GiveBack(ClaimedJob job, string reason)
+    {
         if (!Entries.Exists(job.Path))
         {
             // It already left this worker's folder (the error came after); nothing to hand on.

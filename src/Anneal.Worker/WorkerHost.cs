@@ -1,5 +1,6 @@
 using Microsoft.Extensions.Configuration;
 using Microsoft.Extensions.DependencyInjection;
+using Microsoft.Extensions.DependencyInjection.Extensions;
 using Microsoft.Extensions.Hosting;
 using Microsoft.Extensions.Logging;
 using Microsoft.Extensions.Logging.Console;
@@ -43,6 +44,7 @@ public static class WorkerHost
         var services = builder.Services;
         addAnneal(services);
         services.AddSingleton(run);
+        services.TryAddSingleton(Isolation.SolverProcess.Current());
         services.AddSingleton(TimeProvider.System);
         services.AddSingleton<IValidateOptions<WorkerOptions>, WorkerOptionsValidator>();
         services.AddSingleton(new WorkerSettingsText(builder.Configuration));

@@ -49,6 +49,9 @@ public sealed class WorkerOptions
     /// </summary>
     public double SettleSeconds { get; set; } = 2;
 
+    /// <summary>Where each job's search runs: in its own process (the default; a native crash is that job's failure) or in the worker's.</summary>
+    public SolverIsolation Isolation { get; set; } = SolverIsolation.Process;
+
     /// <summary>Claim a job folder only once it holds the ready marker (<c>.ready</c>); files are still claimed once settled.</summary>
     public bool RequireReadyMarker { get; set; }
 
@@ -66,4 +69,14 @@ public sealed class WorkerOptions
 
     /// <summary>How often the working folder is searched for jobs left by dead workers (also done at start-up).</summary>
     public double RecoverSeconds { get; set; } = 30;
+}
+
+/// <summary>Where a job's search runs.</summary>
+public enum SolverIsolation
+{
+    /// <summary>In a child process (`anneal run-job`): a crash, kill or hang ends that job only.</summary>
+    Process,
+
+    /// <summary>In the worker's own process: no start-up cost, but a native crash ends the worker.</summary>
+    InProcess,
 }

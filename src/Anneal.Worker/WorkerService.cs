@@ -1,5 +1,6 @@
 using Anneal.Formats.Output;
 using Anneal.Worker.Arrival;
+using Anneal.Worker.Isolation;
 using Anneal.Jobs;
 using Microsoft.Extensions.Hosting;
 using Microsoft.Extensions.Logging;
@@ -13,7 +14,7 @@ namespace Anneal.Worker;
 /// stop signal and reaches every solver.
 /// </summary>
 public sealed class WorkerService(
-    IOptions<WorkerOptions> options, WorkerRun run, JobRunner runner, RunWriter writer, IHostApplicationLifetime lifetime, ILoggerFactory logs, TimeProvider clock)
+    IOptions<WorkerOptions> options, WorkerRun run, JobRunner runner, RunWriter writer, SolverProcess solverProcess, IHostApplicationLifetime lifetime, ILoggerFactory logs, TimeProvider clock)
     : BackgroundService
 {
     private readonly ILogger _log = logs.CreateLogger("Anneal.Worker");
@@ -52,7 +53,7 @@ public sealed class WorkerService(
         var settle = new SettleWatch(folders.Inbox, TimeSpan.FromSeconds(o.SettleSeconds), o.RequireReadyMarker, clock);
         var claimer = new JobClaimer(folders, me.Folder, settle, clock);
         var recovery = new DeadWorkerRecovery(folders, me.Id, claimer, o.MaxRetries, _log, clock);
-        var processor = new JobProcessor(o, folders, me.Id, claimer, runner, writer, _log, clock);
+        var processor = new JobProcessor(o, folders, me.Id, claimer, runner, writer, new ChildRun(solverProcess), _log, clock);
         var status = new StatusFile(StatusFile.PathFor(folders.Working, me.Id), me.Id, clock.GetUtcNow());
         _log.LogInformation("Worker {WorkerId} watching {Inbox}; results to {Outbox}, failures to {Failed}; up to {Jobs} job(s) at a time, {Seconds:0.#} s each unless a job says otherwise{Once}",
             me.Id, folders.Inbox, folders.Outbox, folders.Failed, o.ConcurrentJobs, o.TimeSeconds, run.Once ? "; stops when the inbox is empty" : string.Empty);

@@ -105,6 +105,13 @@ internal sealed class AnnealProcess : IDisposable
         _process.WaitForExit();
     }
 
+    /// <summary>SIGKILL of this process alone, leaving its children to notice by themselves.</summary>
+    public void KillAlone()
+    {
+        _process.Kill(entireProcessTree: false);
+        _process.WaitForExit();
+    }
+
     /// <summary>SIGTERM, as systemd sends on stop.</summary>
     public void Terminate() => Send("TERM");
 

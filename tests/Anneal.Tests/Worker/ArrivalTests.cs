@@ -34,7 +34,7 @@ public sealed class ArrivalTests : WorkerTest
             writer.Write(string.Join('\n', stops[6..]));
         }
 
-        Assert.True(worker.WaitForExit(60) == 0, worker.Log);
+        Assert.True(worker.WaitForExit() == 0, worker.Log);
         Assert.Equal(10, ServedStops(Path.Combine(Outbox, "slow")));
     }
 
@@ -78,7 +78,7 @@ public sealed class ArrivalTests : WorkerTest
         // About 300 KB at 100 KB/s: rsync writes each file as .name.XXXXXX and renames it when complete.
         Run("rsync", "-r", "--bwlimit=100", source, Inbox + "/");
 
-        Assert.True(worker.WaitForExit(60) == 0, worker.Log);
+        Assert.True(worker.WaitForExit() == 0, worker.Log);
         Assert.Equal(10, ServedStops(Path.Combine(Outbox, "synced")));
     }
 

@@ -9,6 +9,10 @@ internal static class WorkerJobs
     /// <summary>A valid job; the seed varies the stops so that jobs differ.</summary>
     public static void DropValid(string root, string name, int seed) => Drop(root, name, Stops(seed), Vehicles());
 
+    /// <summary>A valid job whose settings.json gives its own search budget and solver.</summary>
+    public static void DropValid(string root, string name, int seed, double timeSeconds, string solver) =>
+        Drop(root, name, Stops(seed), Vehicles(), "{ \"timeSeconds\": " + timeSeconds.ToString(CultureInfo.InvariantCulture) + ", \"solvers\": [\"" + solver + "\"] }");
+
     /// <summary>stops.csv row 3 has a demand that is not a number.</summary>
     public static void DropBadDemand(string root, string name)
     {
@@ -41,9 +45,14 @@ internal static class WorkerJobs
     }
 
     /// <summary>Writes the job in a staging folder, then renames it into the inbox so the worker never sees half a job.</summary>
-    private static void Drop(string root, string name, string stops, string vehicles)
+    private static void Drop(string root, string name, string stops, string vehicles, string? settings = null)
     {
         string staging = Write(Path.Combine(root, "staging", name), stops, vehicles);
+        if (settings is not null)
+        {
+            File.WriteAllText(Path.Combine(staging, "settings.json"), settings);
+        }
+
         Directory.CreateDirectory(Path.Combine(root, "inbox"));
         Directory.Move(staging, Path.Combine(root, "inbox", name));
     }

@@ -24,7 +24,11 @@ public sealed class WorkerProcess : IDisposable
     public static WorkerProcess Start(string root, params string[] args) => Start(root, new Dictionary<string, string>(), args);
 
     /// <param name="settings">Worker settings that replace the test defaults, e.g. { "SettleSeconds", "1" }.</param>
-    public static WorkerProcess Start(string root, IReadOnlyDictionary<string, string> settings, params string[] args)
+    public static WorkerProcess Start(string root, IReadOnlyDictionary<string, string> settings, params string[] args) =>
+        Start(root, settings, new Dictionary<string, string>(), args);
+
+    /// <param name="extra">Further environment variables, as they are (the solver processes inherit them).</param>
+    public static WorkerProcess Start(string root, IReadOnlyDictionary<string, string> settings, IReadOnlyDictionary<string, string> extra, params string[] args)
     {
         // Tests drop jobs by rename, so they need no settling time; short polls keep the tests quick.
         var environment = new Dictionary<string, string>
@@ -39,6 +43,11 @@ public sealed class WorkerProcess : IDisposable
             environment["ANNEAL_Worker__" + key] = value;
         }
 
+        foreach (var (key, value) in extra)
+        {
+            environment[key] = value;
+        }
+
         return Launch(root, ["worker", "--inbox", "inbox", "--outbox", "outbox", .. args], environment);
     }
 
@@ -46,11 +55,20 @@ public sealed class WorkerProcess : IDisposable
     public static WorkerProcess Launch(string root, IEnumerable<string> args, IReadOnlyDictionary<string, string> environment) =>
         new(AnnealProcess.Start(root, args, environment));
 
-    /// <summary>Waits for the exit; a generous deadline only, so a hung worker fails the test instead of hanging it.</summary>
-    public int WaitForExit(double seconds = 30) => _process.WaitForExit(seconds);
+    /// <summary>
+    /// Waits for the exit; a generous deadline only, so a hung worker fails the test instead of hanging it (each job's
+    /// solver process starts the runtime afresh, seconds on a loaded machine).
+    /// </summary>
+    public int WaitForExit(double seconds = 120) => _process.WaitForExit(seconds);
 
     /// <summary>SIGKILL: no handler runs, exactly like a crash or the OOM killer.</summary>
     public void Kill() => _process.Kill();
+
+    /// <summary>SIGKILL of the worker alone: its solver process is left to notice by itself.</summary>
+    public void KillAlone() => _process.KillAlone();
+
+    /// <summary>The pids of this worker's solver processes (`anneal run-job`), read from /proc.</summary>
+    public IReadOnlyList<int> SolverProcesses() => ChildProcesses.Of(_process.Id, "run-job");
 
     /// <summary>SIGTERM, as systemd sends on stop.</summary>
     public void Terminate() => _process.Terminate();
