@@ -43,7 +43,7 @@ public abstract class WorkerTest : TempFolderTest
     {
         foreach (var file in new[] { "routes.csv", "summary.json", "trace.csv", "job.json" })
         {
-            Assert.True(File.Exists(Path.Combine(folder, file)), $"{file} is missing in {folder}");
+            Assert.True(File.Exists(Path.Combine(folder, file)), $"{file} is missing in {folder}, which holds {string.Join(", ", Directory.GetFileSystemEntries(folder).Select(Path.GetFileName))}");
         }
 
         Assert.Equal(interrupted, Json(Path.Combine(folder, "summary.json")).GetProperty("interrupted").GetBoolean());

@@ -114,6 +114,7 @@ public sealed class WorkerTests : WorkerTest
 
         // ShutdownTimeoutSeconds is 10 here; the deadline is generous on purpose.
         Assert.True(worker.WaitForExit(60) == 130, worker.Log);
+        Assert.True(File.Exists(Path.Combine(Outbox, "long", "routes.csv")), worker.Log);
         AssertComplete(Path.Combine(Outbox, "long"), interrupted: true);
         Assert.False(Record(Path.Combine(Outbox, "long")).GetProperty("final").GetBoolean());
 
