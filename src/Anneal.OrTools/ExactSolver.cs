@@ -53,10 +53,12 @@ public sealed class ExactSolver : ISolver
         var trace = new TraceRecorder(progress, options.TimeLimit.TotalSeconds);
         var keeper = new Keeper(instance, exact, trace, clock);
 
-        // The best known plan, Anneal's construction, as a hint: CP-SAT starts from it, and it is the answer
-        // should CP-SAT find nothing better in time.
-        if ((options.StartPlan ?? _start?.Build(instance, cancel)) is { } plan && keeper.Offer(plan, Keeper.HintState) is { Feasible: true })
+        // The best known plan (the starting plan given, else Anneal's construction) as a hint when it keeps every
+        // hard rule: CP-SAT starts from it, and it is the answer should CP-SAT find nothing better in time.
+        bool hinted = false;
+        if ((options.StartPlan ?? _start?.Build(instance, cancel)) is { } plan && keeper.OfferConstruction(plan))
         {
+            hinted = true;
             exact.Hint(plan);
             CompleteHint(exact, options.TimeLimit - clock.Elapsed, cancel);
         }
@@ -107,12 +109,14 @@ public sealed class ExactSolver : ISolver
                 break;
         }
 
-        if (keeper.BestIsHint)
+        if (keeper.BestIsConstruction)
         {
             // Said first, in every case: the plan shown is Anneal's construction, not a plan CP-SAT found.
+            string source = options.StartPlan is null ? "Anneal's construction" : "the plan it was started from";
+            string which = hinted ? "the hint it was given" : "which breaks hard rules and so was not given to CP-SAT as a hint";
             notes.Insert(0, status is CpSolverStatus.Optimal or CpSolverStatus.Feasible
-                ? "its plan is Anneal's construction, the hint it was given: CP-SAT found none better"
-                : "its plan is Anneal's construction, the hint it was given: CP-SAT found no plan of its own");
+                ? $"its plan is {source}, {which}: CP-SAT found none better"
+                : $"its plan is {source}, {which}: CP-SAT found no plan of its own");
         }
 
         if (keeper.Best is null && status != CpSolverStatus.Infeasible)
@@ -162,18 +166,27 @@ public sealed class ExactSolver : ISolver
     private sealed class Keeper(Instance instance, ExactModel exact, TraceRecorder trace, Stopwatch clock) : CpSolverSolutionCallback
     {
         public const string HintState = "construction (hint)";
+        public const string ConstructionState = "construction";
 
         public PlanEvaluation? Best { get; private set; }
         public Plan BestPlan { get; private set; } = Plan.Empty;
         public long Solutions { get; private set; }
 
-        /// <summary>The best plan is still the hinted construction: CP-SAT found none better of its own.</summary>
-        public bool BestIsHint { get; private set; }
+        /// <summary>The best plan is still Anneal's construction: CP-SAT found none better of its own.</summary>
+        public bool BestIsConstruction { get; private set; }
 
         public override void OnSolutionCallback()
         {
             Solutions++;
             Offer(exact.Decode(BooleanValue), "CP-SAT");
+        }
+
+        /// <summary>Keeps Anneal's construction; true when it keeps every hard rule and so may be CP-SAT's hint.</summary>
+        public bool OfferConstruction(Plan plan)
+        {
+            bool feasible = PlanEvaluator.Evaluate(instance, plan).Feasible;
+            Offer(plan, feasible ? HintState : ConstructionState);
+            return feasible;
         }
 
         /// <summary>Keeps the plan when it beats the best; returns the evaluator's verdict on it.</summary>
@@ -184,7 +197,7 @@ public sealed class ExactSolver : ISolver
             {
                 Best = judged;
                 BestPlan = plan;
-                BestIsHint = state == HintState;
+                BestIsConstruction = state is HintState or ConstructionState;
                 trace.Improved(new TracePoint(clock.Elapsed.TotalSeconds, Solutions, judged.Objective, judged.Objective, judged.Feasible, state));
             }
 

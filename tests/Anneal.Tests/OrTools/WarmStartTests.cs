@@ -74,6 +74,21 @@ public sealed class WarmStartTests
         Assert.Equal(PlanEvaluator.Evaluate(instance, own.Plan).Objective, PlanEvaluator.Evaluate(instance, hinted.Plan).Objective, 9);
     }
 
+    [Fact]
+    public void Exact_does_not_call_a_construction_that_breaks_hard_rules_its_hint()
+    {
+        // Stop b needs 150 kg, the one vehicle carries 100: the construction leaves it out (a hard rule broken), so it
+        // is no hint, and CP-SAT, with no plan that keeps every rule, returns that construction, saying which it is.
+        var instance = TinyInstances.Line([TinyInstances.Stop("a", 5), TinyInstances.Stop("b", 8, demand: 150)], [TinyInstances.Vehicle("v")], RuleSet.AllHard);
+        var result = new ExactSolver(new ExactSettings { Workers = 1 }, new InsertionStart()).Solve(instance, new SolveOptions { TimeLimit = TimeSpan.FromSeconds(10) }, null, default);
+
+        Assert.True(result.HasPlan);
+        Assert.False(PlanEvaluator.Evaluate(instance, result.Plan).Feasible);
+        Assert.NotEqual(SolverStatus.NoSolution, result.Status); // it holds a plan
+        Assert.StartsWith("its plan is Anneal's construction, which breaks hard rules and so was not given to CP-SAT as a hint", (result.Notes ?? [])[0], StringComparison.Ordinal);
+        Assert.Equal("construction", result.Trace[0].State);
+    }
+
     private static PlanEvaluation Construction(Instance instance)
     {
         var state = InsertionSolver.Build(instance, new CandidateLists(instance, 30));
