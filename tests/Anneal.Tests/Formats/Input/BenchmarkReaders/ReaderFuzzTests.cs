@@ -20,9 +20,11 @@ public class ReaderFuzzTests
     private const string RouteSeed = "4a3dFhhvcWPm";
 
     [Fact]
+    [Trait("Category", FuzzBudget.Category)]
     public void Damaged_solomon_text_reads_or_fails_cleanly() => InstanceProperty(SampleTexts.Solomon, "fuzz.txt", SolomonSeed, SolomonReader.Parse);
 
     [Fact]
+    [Trait("Category", FuzzBudget.Category)]
     public void Damaged_cvrplib_text_reads_or_fails_cleanly() => InstanceProperty(SampleTexts.Cvrplib, "fuzz.vrp", CvrplibSeed, CvrplibReader.Parse);
 
     private static void InstanceProperty(string sample, string file, string seed, Func<string, string, Instance> parse) =>
@@ -30,9 +32,10 @@ public class ReaderFuzzTests
         {
             string text = TextMutation.Apply(sample, m);
             ReadOrFail(text, file, () => CheckInstance(parse(text, file)));
-        }, seed: seed, iter: Iterations, threads: 1);
+        }, seed: seed, iter: FuzzBudget.Cases(Iterations), threads: 1);
 
     [Fact]
+    [Trait("Category", FuzzBudget.Category)]
     public void Damaged_route_files_read_or_fail_with_a_row()
     {
         var instance = SolomonReader.Parse(SampleTexts.Solomon, "tiny.txt");
@@ -45,7 +48,7 @@ public class ReaderFuzzTests
                 Assert.Empty(plan.StructureErrors(instance));
                 Assert.True(double.IsFinite(PlanEvaluator.Evaluate(instance, plan).Objective));
             }, rowRequired: true);
-        }, seed: RouteSeed, iter: Iterations, threads: 1);
+        }, seed: RouteSeed, iter: FuzzBudget.Cases(Iterations), threads: 1);
     }
 
     private static void ReadOrFail(string text, string file, Action read, bool rowRequired = false)

@@ -16,10 +16,11 @@ public class CsvJobFuzzTests
         Gen.Select(Gen.Int[0, Files.Length - 1], Gen.Int[0, 9], Gen.Int[0, 400], Gen.Int[0, 400]);
 
     [Fact]
+    [Trait("Category", FuzzBudget.Category)]
     public void Mutated_jobs_load_or_fail_with_located_problems()
     {
         // One fixed seed and many cases in one sample keeps the test deterministic (project rule) yet broad.
-        Mutation.Array[1, 3].Array[150].Sample(cases =>
+        Mutation.Array[1, 3].Array[FuzzBudget.Cases(150)].Sample(cases =>
         {
             using var job = new JobFolder(new Dictionary<string, string>());
             foreach (var mutations in cases)
