@@ -3,89 +3,96 @@ using Anneal.Core.Model;
 using Anneal.Core.Plans;
 using Anneal.Search.Moves;
 using Anneal.Search.Representation;
+using CsCheck;
 
 namespace Anneal.Tests.Search.Representation;
 
 /// <summary>
-/// Every incremental move evaluation agrees with the exact evaluator (PlanEvaluator, the truth) on random
-/// instances, random plans and random moves: same penalized cost change to 1e-6 and the same feasibility.
+/// Every incremental move evaluation (<see cref="MoveEvaluator"/>, reached through <see cref="SearchState"/> as the
+/// solvers reach it) agrees with the exact evaluator (PlanEvaluator, the truth): a CsCheck property over random
+/// instances (hard or soft, single or several windows, one to three dimensions, equal or mixed vehicles), random
+/// plans and random moves: same penalized and objective change to 1e-6, the same feasibility, and the same for the
+/// by-rule parts and the one-route feasible change.
 /// </summary>
 public sealed class IncrementalEvaluationTests
 {
-    public static TheoryData<bool, bool, int> Cases => new()
-    {
-        { true, false, 1 },   // hard single windows: O(1) segment concatenation
-        { true, false, 3 },
-        { false, false, 2 },  // soft windows: lateness propagates, exact forward pass
-        { true, true, 1 },    // several windows per stop
-        { false, true, 2 },
-    };
+    // A fixed first seed keeps the run deterministic; set CsCheck_Seed or change it to explore further.
+    private const string MoveSeed = "7k2QpLm9Xa1B";
 
-    [Theory]
-    [MemberData(nameof(Cases))]
-    public void MoveDeltaMatchesExactEvaluator(bool hardWindows, bool multiWindows, int dims)
+    private sealed record Case(int Seed, bool HardWindows, bool MultiWindows, int Dims, bool Heterogeneous, int Stops, int Vehicles);
+
+    private static readonly Gen<Case> Cases =
+        Gen.Select(Gen.Int[0, 1_000_000], Gen.Bool, Gen.Bool, Gen.Int[1, 3], Gen.Bool, Gen.Int[6, 22], Gen.Int[2, 4],
+            (seed, hard, multi, dims, mixed, stops, vehicles) => new Case(seed, hard, multi, dims, mixed, stops, vehicles));
+
+    [Fact]
+    public void Every_move_evaluation_matches_the_exact_evaluator()
     {
         int checkedMoves = 0;
-        for (int seed = 0; seed < 40; seed++)
+        Cases.Sample(c => checkedMoves += CheckMoves(c), seed: MoveSeed, iter: 200, threads: 1);
+        Assert.True(checkedMoves > 3000, $"only {checkedMoves} moves were checked");
+    }
+
+    private static int CheckMoves(Case c)
+    {
+        int checkedMoves = 0;
+        var rng = new Random(c.Seed);
+        var instance = RandomInstances.Create(rng, c.Stops, c.Vehicles, c.HardWindows, c.MultiWindows, c.Dims, c.Heterogeneous);
+        var weights = new PenaltyWeights { TimeWindow = 3.5, Capacity = 7, Overtime = 2, Duration = 1.5, Equipment = 50, Unserved = 1000 };
+        var state = new SearchState(instance, weights);
+        Assert.Equal(c.HardWindows && !c.MultiWindows, state.FastPath);
+        state.Load(RandomPlan(rng, instance));
+        for (int step = 0; step < 60; step++)
         {
-            var rng = new Random(seed);
-            var instance = RandomInstances.Create(rng, rng.Next(6, 22), rng.Next(2, 5), hardWindows, multiWindows, dims, heterogeneous: seed % 2 == 1);
-            var weights = new PenaltyWeights { TimeWindow = 3.5, Capacity = 7, Overtime = 2, Duration = 1.5, Equipment = 50, Unserved = 1000 };
-            var state = new SearchState(instance, weights);
-            Assert.Equal(hardWindows && !multiWindows, state.FastPath);
-            state.Load(RandomPlan(rng, instance));
-            for (int step = 0; step < 150; step++)
+            var move = default(MoveDraft);
+            if (!RandomMove(rng, state, ref move))
             {
-                var move = default(MoveDraft);
-                if (!RandomMove(rng, state, ref move))
-                {
-                    continue;
-                }
-
-                double before = PlanEvaluator.Penalized(instance, state.ToPlan(), weights);
-                double objectiveBefore = PlanEvaluator.Evaluate(instance, state.ToPlan()).Objective;
-                var effect = state.Evaluate(ref move);
-                double delta = effect.Penalized;
-                var parts = state.EvaluateParts(ref move);
-                bool partsFeasible = state.FeasibleAfter(parts);
-                bool opens = state.OpensRoute(ref move);
-                bool empties = state.EmptiesRoute(ref move);
-                int usedBefore = state.ToPlan().VehiclesUsed;
-                double routeBefore = RouteObjective(PlanEvaluator.Evaluate(instance, state.ToPlan()), move.A.Route);
-                bool routeKeepsRules = state.FeasibleChange(ref move.A, out double routeChange);
-                state.Apply(ref move);
-                var plan = state.ToPlan();
-                Assert.Equal(empties, parts.EmptiesRoute);
-                Assert.Equal(opens, parts.OpensRoute);
-                Assert.Equal((opens ? 1 : 0) - (empties ? 1 : 0), plan.VehiclesUsed - usedBefore);
-                var truth = PlanEvaluator.Evaluate(instance, plan);
-                double after = PlanEvaluator.Penalized(instance, plan, weights);
-                double tolerance = 1e-6 * Math.Max(1, Math.Abs(before));
-                var routeTruth = truth.Routes.FirstOrDefault(r => r.Vehicle == move.A.Route);
-                Assert.Equal(routeTruth?.Feasible ?? true, routeKeepsRules);
-                if (routeKeepsRules)
-                {
-                    Assert.True(Math.Abs(RouteObjective(truth, move.A.Route) - routeBefore - routeChange) <= tolerance,
-                        $"seed {seed} step {step} {move.Kind}: route change {routeChange}, exact {RouteObjective(truth, move.A.Route) - routeBefore}");
-                }
-
-                Assert.True(Math.Abs(after - before - delta) <= tolerance,
-                    $"seed {seed} step {step} {move.Kind}: incremental delta {delta}, exact {after - before}");
-                Assert.True(Math.Abs(truth.Objective - objectiveBefore - effect.Objective) <= tolerance,
-                    $"seed {seed} step {step} {move.Kind}: objective delta {effect.Objective}, exact {truth.Objective - objectiveBefore}");
-                Assert.Equal(truth.Feasible, effect.FeasibleAfter);
-                Assert.True(Math.Abs(parts.Penalized(weights) - delta) <= tolerance, $"{move.Kind}: parts {parts.Penalized(weights)} vs delta {delta}");
-                Assert.True(Math.Abs(parts.Objective - effect.Objective) <= tolerance, "parts objective differs");
-                Assert.Equal(truth.Feasible, partsFeasible);
-                Assert.Equal(truth.Feasible, parts.FeasibleAfter);
-                Assert.Equal(truth.Feasible, state.Feasible);
-                Assert.True(Math.Abs(state.Penalized - after) <= tolerance, "running penalized total drifted");
-                Assert.True(Math.Abs(state.Objective - truth.Objective) <= tolerance, "running objective total drifted");
-                checkedMoves++;
+                continue;
             }
+
+            double before = PlanEvaluator.Penalized(instance, state.ToPlan(), weights);
+            double objectiveBefore = PlanEvaluator.Evaluate(instance, state.ToPlan()).Objective;
+            var effect = state.Evaluate(ref move);
+            double delta = effect.Penalized;
+            var parts = state.EvaluateParts(ref move);
+            bool partsFeasible = state.FeasibleAfter(parts);
+            bool opens = state.OpensRoute(ref move);
+            bool empties = state.EmptiesRoute(ref move);
+            int usedBefore = state.ToPlan().VehiclesUsed;
+            double routeBefore = RouteObjective(PlanEvaluator.Evaluate(instance, state.ToPlan()), move.A.Route);
+            bool routeKeepsRules = state.FeasibleChange(ref move.A, out double routeChange);
+            state.Apply(ref move);
+            var plan = state.ToPlan();
+            Assert.Equal(empties, parts.EmptiesRoute);
+            Assert.Equal(opens, parts.OpensRoute);
+            Assert.Equal((opens ? 1 : 0) - (empties ? 1 : 0), plan.VehiclesUsed - usedBefore);
+            var truth = PlanEvaluator.Evaluate(instance, plan);
+            double after = PlanEvaluator.Penalized(instance, plan, weights);
+            double tolerance = 1e-6 * Math.Max(1, Math.Abs(before));
+            var routeTruth = truth.Routes.FirstOrDefault(r => r.Vehicle == move.A.Route);
+            Assert.Equal(routeTruth?.Feasible ?? true, routeKeepsRules);
+            if (routeKeepsRules)
+            {
+                Assert.True(Math.Abs(RouteObjective(truth, move.A.Route) - routeBefore - routeChange) <= tolerance,
+                    $"{c} step {step} {move.Kind}: route change {routeChange}, exact {RouteObjective(truth, move.A.Route) - routeBefore}");
+            }
+
+            Assert.True(Math.Abs(after - before - delta) <= tolerance,
+                $"{c} step {step} {move.Kind}: incremental delta {delta}, exact {after - before}");
+            Assert.True(Math.Abs(truth.Objective - objectiveBefore - effect.Objective) <= tolerance,
+                $"{c} step {step} {move.Kind}: objective delta {effect.Objective}, exact {truth.Objective - objectiveBefore}");
+            Assert.Equal(truth.Feasible, effect.FeasibleAfter);
+            Assert.True(Math.Abs(parts.Penalized(weights) - delta) <= tolerance, $"{move.Kind}: parts {parts.Penalized(weights)} vs delta {delta}");
+            Assert.True(Math.Abs(parts.Objective - effect.Objective) <= tolerance, "parts objective differs");
+            Assert.Equal(truth.Feasible, partsFeasible);
+            Assert.Equal(truth.Feasible, parts.FeasibleAfter);
+            Assert.Equal(truth.Feasible, state.Feasible);
+            Assert.True(Math.Abs(state.Penalized - after) <= tolerance, "running penalized total drifted");
+            Assert.True(Math.Abs(state.Objective - truth.Objective) <= tolerance, "running objective total drifted");
+            checkedMoves++;
         }
 
-        Assert.True(checkedMoves > 1000, $"only {checkedMoves} moves were checked");
+        return checkedMoves;
     }
 
     [Fact]
