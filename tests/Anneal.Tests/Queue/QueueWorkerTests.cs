@@ -110,12 +110,14 @@ public sealed class QueueWorkerTests(PostgresCluster cluster) : QueueTest(cluste
     {
         Init();
         var paths = Enumerable.Range(1, 10).Select(k => WorkerJobs.WriteValid(Path.Combine(Dir, "jobs", $"depot-{k:00}"), 200 + k)).ToArray();
-        Submit(["--time", "1.5", "--solvers", "sa", .. paths]);
+        Submit(["--time", "3", "--solvers", "sa", .. paths]);
         var patient = new Dictionary<string, string> { ["ANNEAL_Queue__LeaseSeconds"] = "30", ["ANNEAL_Queue__HeartbeatSeconds"] = "1", ["ANNEAL_Queue__RetryMaxSeconds"] = "1" };
         using var a = Worker(patient);
         using var b = Worker(patient);
         WaitUntil(() => Status().GetProperty("done").GetInt32() >= 2, 60, () => a.Log + "\n---\n" + b.Log);
 
+        // Stop while a search runs (on a loaded machine both workers may be between jobs at any one moment).
+        WaitUntil(() => Status().GetProperty("running").GetInt32() >= 1, 60, () => a.Log + "\n---\n" + b.Log);
         var stoppedAt = Scalar<DateTime>("SELECT now()");
         Cluster.Stop();
         Thread.Sleep(10_000);
