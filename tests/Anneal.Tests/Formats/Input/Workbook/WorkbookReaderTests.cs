@@ -3,6 +3,7 @@ using Anneal.Core.Model;
 using Anneal.Formats.Input;
 using Anneal.Tests.Formats.Input.Csv;
 using Anneal.Tests.Fixtures;
+using Anneal.Tests.Worker;
 
 namespace Anneal.Tests.Formats.Input.Workbook;
 
@@ -158,10 +159,10 @@ public sealed class WorkbookReaderTests : TempFolderTest
         File.Move(Book(), Path.Combine(inbox, "north.xlsx"));
         File.SetLastWriteTimeUtc(Path.Combine(inbox, "north.xlsx"), DateTime.UtcNow.AddMinutes(-1)); // settled
 
-        var err = new StringWriter();
-        int code = CliApp.Run(["worker", "--inbox", inbox, "--outbox", outbox, "--once", "--time", "1", "--solvers", "insertion"], new StringWriter(), err);
+        // A real worker process: each job's search runs in a child `anneal run-job`, which the test host cannot be.
+        using var worker = WorkerProcess.Start(Dir, "--once", "--time", "1", "--solvers", "insertion");
 
-        Assert.True(code == ExitCodes.Success, err.ToString());
-        Assert.True(File.Exists(Path.Combine(outbox, "north", "summary.json")), err.ToString());
+        Assert.Equal(ExitCodes.Success, worker.WaitForExit());
+        Assert.True(File.Exists(Path.Combine(outbox, "north", "summary.json")));
     }
 }
