@@ -31,6 +31,9 @@ public sealed class SegmentCache
     private readonly Segment[] _depotEnd;
     private readonly int[] _scratch;
 
+    // Only for jobs where stops also collect: the load then changes along the route (null when delivery-only).
+    private readonly LoadCache? _loads;
+
     public SegmentCache(Instance instance, RouteStore store)
     {
         _instance = instance;
@@ -71,6 +74,8 @@ public sealed class SegmentCache
             _depotStart[v] = Segment.Depot(instance.DepotLocation(veh.StartDepot), veh.ShiftStart, veh.ShiftEnd);
             _depotEnd[v] = Segment.Depot(instance.DepotLocation(veh.EndDepot), double.NegativeInfinity, double.PositiveInfinity);
         }
+
+        _loads = FastPath && instance.HasPickups ? new LoadCache(instance, store) : null;
     }
 
     /// <summary>Segment concatenation is exact here: hard single windows and at most four dimensions.</summary>
@@ -124,6 +129,8 @@ public sealed class SegmentCache
             tails[k] = suffix[k];
             Append(ref tails[k], in _depotEnd[route], travel);
         }
+
+        _loads?.Rebuild(route);
     }
 
     /// <summary>The measures of the route a draft describes, as the scheduler would give them for its stops.</summary>
@@ -220,7 +227,7 @@ public sealed class SegmentCache
         m.Return = acc.Earliest + acc.Duration - acc.TimeWarp;
         m.Overtime = Math.Max(0, m.Return - costs.ShiftEnd(vehicle));
         m.DurationExcess = Math.Max(0, m.Duration - costs.MaxDuration(vehicle));
-        m.Overload = Overload(vehicle, in acc);
+        m.Overload = _loads is null ? Overload(vehicle, in acc) : _loads.Overload(ref draft, vehicle);
         m.MissingEquipment = System.Numerics.BitOperations.PopCount(acc.Needs & ~costs.Equipment(vehicle));
         return m;
     }
@@ -242,27 +249,7 @@ public sealed class SegmentCache
         return x.First == y.First && x.Earliest == y.Earliest && x.Latest == y.Latest;
     }
 
-    private double Overload(int vehicle, in Segment s)
-    {
-        int dims = _instance.DimensionCount;
-        double over = Math.Max(0, s.Load0 - _instance.Capacity(vehicle, 0));
-        if (dims > 1)
-        {
-            over += Math.Max(0, s.Load1 - _instance.Capacity(vehicle, 1));
-        }
-
-        if (dims > 2)
-        {
-            over += Math.Max(0, s.Load2 - _instance.Capacity(vehicle, 2));
-        }
-
-        if (dims > 3)
-        {
-            over += Math.Max(0, s.Load3 - _instance.Capacity(vehicle, 3));
-        }
-
-        return over;
-    }
+    private double Overload(int vehicle, in Segment s) => LoadCache.Over(_instance, vehicle, s.Load0, s.Load1, s.Load2, s.Load3);
 
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private static void Append(ref Segment acc, in Segment next, TravelTable travel)

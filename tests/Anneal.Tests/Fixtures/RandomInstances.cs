@@ -3,10 +3,14 @@ using Anneal.Core.Travel;
 
 namespace Anneal.Tests.Fixtures;
 
-/// <summary>Small random instances for property tests: windows, several dimensions, equipment, mixed rules.</summary>
+/// <summary>
+/// Small random instances for property tests: windows, several dimensions, equipment, mixed rules; with
+/// <c>pickups</c>, about half the stops also collect (returns that ride to the depot), with amounts up to twice a
+/// delivery so that the fullest point is often in mid-route.
+/// </summary>
 internal static class RandomInstances
 {
-    public static Instance Create(Random rng, int stops, int vehicles, bool hardWindows, bool multiWindows = false, int dims = 1, bool heterogeneous = false)
+    public static Instance Create(Random rng, int stops, int vehicles, bool hardWindows, bool multiWindows = false, int dims = 1, bool heterogeneous = false, bool pickups = false)
     {
         var stopList = new List<Stop>();
         int locs = stops + 1;
@@ -31,12 +35,22 @@ internal static class RandomInstances
                 demand[d] = rng.Next(1, 30);
             }
 
+            var pickup = new double[pickups ? dims : 0];
+            if (pickups && rng.Next(2) == 0)
+            {
+                for (int d = 0; d < dims; d++)
+                {
+                    pickup[d] = rng.Next(0, 60);
+                }
+            }
+
             stopList.Add(new Stop
             {
                 Id = "s" + (i + 1),
                 X = x[i],
                 Y = y[i],
                 Demand = demand,
+                Pickup = pickup,
                 ServiceTime = rng.Next(0, 15),
                 Windows = windows.ToArray(),
                 Needs = rng.Next(6) == 0 ? 1UL : 0UL,

@@ -19,9 +19,9 @@ public sealed class IncrementalEvaluationTests
     // A fixed first seed keeps the run deterministic; set CsCheck_Seed or change it to explore further.
     private const string MoveSeed = "7k2QpLm9Xa1B";
 
-    private sealed record Case(int Seed, bool HardWindows, bool MultiWindows, int Dims, bool Heterogeneous, int Stops, int Vehicles);
+    internal sealed record Case(int Seed, bool HardWindows, bool MultiWindows, int Dims, bool Heterogeneous, int Stops, int Vehicles, bool Pickups = false);
 
-    private static readonly Gen<Case> Cases =
+    internal static readonly Gen<Case> Cases =
         Gen.Select(Gen.Int[0, 1_000_000], Gen.Bool, Gen.Bool, Gen.Int[1, 3], Gen.Bool, Gen.Int[6, 22], Gen.Int[2, 4],
             (seed, hard, multi, dims, mixed, stops, vehicles) => new Case(seed, hard, multi, dims, mixed, stops, vehicles));
 
@@ -33,14 +33,14 @@ public sealed class IncrementalEvaluationTests
         Assert.True(checkedMoves > 3000, $"only {checkedMoves} moves were checked");
     }
 
-    private static int CheckMoves(Case c)
+    internal static int CheckMoves(Case c)
     {
         int checkedMoves = 0;
         var rng = new Random(c.Seed);
-        var instance = RandomInstances.Create(rng, c.Stops, c.Vehicles, c.HardWindows, c.MultiWindows, c.Dims, c.Heterogeneous);
+        var instance = RandomInstances.Create(rng, c.Stops, c.Vehicles, c.HardWindows, c.MultiWindows, c.Dims, c.Heterogeneous, c.Pickups);
         var weights = new PenaltyWeights { TimeWindow = 3.5, Capacity = 7, Overtime = 2, Duration = 1.5, Equipment = 50, Unserved = 1000 };
         var state = new SearchState(instance, weights);
-        Assert.Equal(c.HardWindows && !c.MultiWindows, state.FastPath);
+        Assert.Equal(c.HardWindows && instance.SingleWindows, state.FastPath);
         state.Load(RandomPlan(rng, instance));
         for (int step = 0; step < 60; step++)
         {
