@@ -145,9 +145,7 @@ public sealed class JobProcessor(
     /// <summary>The search in its own process (Isolation: Process, the default): its crash, kill or hang is this job's failure only.</summary>
     private ChildOutcome InChild(ClaimedJob job, string located, string partial, JobRequest request, JobPlan plan, JobProgress progress, CancellationToken stop)
     {
-        // A search that has not ended a generous while after its budget is taken to hang.
-        var deadline = TimeSpan.FromSeconds(plan.Seconds + Math.Max(30, plan.Seconds / 4));
-        return child.Run(ChildSide.Arguments(Path.GetFullPath(located), partial, request, job.ClaimedAt), deadline,
+        return child.Run(ChildSide.Arguments(Path.GetFullPath(located), partial, request, job.ClaimedAt), ChildRun.Deadline(plan.Seconds, options.HangGraceSeconds),
             TimeSpan.FromSeconds(options.ShutdownTimeoutSeconds), progress.Report, stop);
     }
 

@@ -52,6 +52,12 @@ public sealed class WorkerOptions
     /// <summary>Where each job's search runs: in its own process (the default; a native crash is that job's failure) or in the worker's.</summary>
     public SolverIsolation Isolation { get; set; } = SolverIsolation.Process;
 
+    /// <summary>
+    /// A solver process still running this long past its budget (or a quarter of the budget, if longer) counts as hung:
+    /// it is sent SIGTERM, killed after ShutdownTimeoutSeconds, and its job fails with that reason.
+    /// </summary>
+    public double HangGraceSeconds { get; set; } = 30;
+
     /// <summary>Claim a job folder only once it holds the ready marker (<c>.ready</c>); files are still claimed once settled.</summary>
     public bool RequireReadyMarker { get; set; }
 

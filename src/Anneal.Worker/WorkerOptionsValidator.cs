@@ -32,6 +32,7 @@ public sealed class WorkerOptionsValidator(SolverCatalog catalog, WorkerRun run,
         AtLeast(problems, options.MaxRetries, 0, "MaxRetries");
         Positive(problems, options.TimeSeconds, "TimeSeconds (--time)");
         Positive(problems, options.ShutdownTimeoutSeconds, "ShutdownTimeoutSeconds");
+        Positive(problems, options.HangGraceSeconds, "HangGraceSeconds");
         Positive(problems, options.PollSeconds, "PollSeconds");
         Positive(problems, options.StatusSeconds, "StatusSeconds");
         Positive(problems, options.RecoverSeconds, "RecoverSeconds");

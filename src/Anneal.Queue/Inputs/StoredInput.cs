@@ -8,12 +8,17 @@ public static class StoredInput
     /// <param name="scratch">An empty folder of the caller's, removed by the caller.</param>
     /// <param name="shownAs">Replaces the scratch folder in problem messages (the submitted path's folder, or empty).</param>
     /// <exception cref="InputException">with every problem, naming files as the user knows them.</exception>
-    public static LoadedInput Load(IInputKind kind, string jobName, IReadOnlyList<StoredFile> files, string scratch, string shownAs)
+    public static LoadedInput Load(IInputKind kind, string jobName, IReadOnlyList<StoredFile> files, string scratch, string shownAs) =>
+        Open(kind, jobName, files, scratch, shownAs).Input;
+
+    /// <summary>As <see cref="Load"/>, also giving the path the job was laid out at (for a solver process to read it again).</summary>
+    public static (LoadedInput Input, string Located) Open(IInputKind kind, string jobName, IReadOnlyList<StoredFile> files, string scratch, string shownAs)
     {
         Directory.CreateDirectory(scratch);
         try
         {
-            return InputLoader.Load(kind.Unpack(scratch, jobName, files));
+            string located = kind.Unpack(scratch, jobName, files);
+            return (InputLoader.Load(located), located);
         }
         catch (InputException e)
         {

@@ -4,6 +4,7 @@ using Anneal.Jobs;
 using Anneal.Queue.Inputs;
 using Anneal.Queue.Jobs;
 using Anneal.Worker;
+using Anneal.Worker.Isolation;
 using Microsoft.Extensions.Logging;
 
 namespace Anneal.Queue.Worker;
@@ -14,7 +15,7 @@ namespace Anneal.Queue.Worker;
 /// lose the run: storing is retried with backoff until it answers (or the worker's stop deadline passes).
 /// </summary>
 public sealed class QueueJobProcessor(
-    WorkerOptions options, QueueOptions queue, Claims claims, ResultStore store, JobRunner runner, RunWriter writer, string workerId, ILogger log, TimeProvider clock)
+    WorkerOptions options, QueueOptions queue, Claims claims, ResultStore store, JobRunner runner, RunWriter writer, ChildRun child, string workerId, ILogger log, TimeProvider clock)
 {
     public async Task ProcessAsync(QueueJob job, CancellationToken stop)
     {
@@ -49,6 +50,8 @@ public sealed class QueueJobProcessor(
     private async Task SolveAsync(QueueJob job, string scratch, CancellationToken stop)
     {
         JobPlan plan;
+        JobRequest request;
+        string located;
         try
         {
             var (reached, files) = await PersistAsync(job, ct => claims.InputsAsync(job.Id, ct), stop);
@@ -57,8 +60,9 @@ public sealed class QueueJobProcessor(
                 return;
             }
 
-            var input = StoredInput.Load(InputKinds.Named(job.Kind), job.Name, files!, Path.Combine(scratch, "input"), string.Empty);
-            plan = runner.Prepare(input, Submitter.Request(job.Spec, options.TimeSeconds, options.ThreadsPerJob, options.Solvers));
+            (var input, located) = StoredInput.Open(InputKinds.Named(job.Kind), job.Name, files!, Path.Combine(scratch, "input"), string.Empty);
+            request = Submitter.Request(job.Spec, options.TimeSeconds, options.ThreadsPerJob, options.Solvers);
+            plan = runner.Prepare(input, request);
         }
         catch (Exception e) when (e is InputException or UnknownSolverException)
         {
@@ -81,15 +85,39 @@ public sealed class QueueJobProcessor(
         // The lease is renewed for the whole claim: the search, then drawing the pictures and storing the result.
         await using var heartbeat = new Heartbeat(claims, job, queue, progress, search.Cancel, log, clock);
 
-        // Solvers block their threads for the whole budget; a long-running task keeps them off the thread pool.
-        var run = await Task.Factory.StartNew(() => runner.Run(plan, progress.Report, search.Token), CancellationToken.None, TaskCreationOptions.LongRunning, TaskScheduler.Default);
-
-        bool requeue = run.Interrupted && stop.IsCancellationRequested && options.OnShutdown == ShutdownChoice.Requeue;
         string folder = Directory.CreateDirectory(Path.Combine(scratch, "run")).FullName;
+        double? benchBudget = job.Spec.ExperimentId is null ? null : plan.Seconds;
+
+        // Solvers block their threads for the whole budget; a long-running task keeps them off the thread pool.
+        var outcome = await Task.Factory.StartNew(
+            () => options.Isolation == SolverIsolation.Process
+                ? InChild(plan, request, located, scratch, folder, benchBudget, progress, search.Token)
+                : InProcess(plan, folder, benchBudget, progress, search.Token),
+            CancellationToken.None, TaskCreationOptions.LongRunning, TaskScheduler.Default);
+        ResultPackage result;
+        switch (outcome)
+        {
+            case Solved solved:
+                result = solved.Package;
+                break;
+            case NotSolved { Outcome: ChildOutcome.Failed failed }:
+                // The same input would crash again: failed at once, with the reason, instead of costing its retries.
+                QueueLog.SolverFailed(log, job.Id, failed.Reason);
+                await PersistAsync(job, ct => store.FailAsync(job, $"The job could not be solved: {failed.Reason}. The other solvers may still solve it (\"solvers\" in settings.json).", ct), stop);
+                return;
+            case NotSolved { Outcome: ChildOutcome.NoSpace full }:
+                QueueLog.JobError(log, job.Id, job.Attempt, full.Reason, "queued again with no attempt counted (the worker's disk is full)");
+                await PersistAsync(job, ct => store.RetryAsync(job, full.Reason, countAttempt: false, ct), stop);
+                return;
+            default:
+                await PersistAsync(job, ct => store.RetryAsync(job, null, countAttempt: false, ct), stop);
+                return;
+        }
+
+        bool requeue = result.Interrupted && stop.IsCancellationRequested && options.OnShutdown == ShutdownChoice.Requeue;
         var now = clock.GetUtcNow();
-        writer.Write(folder, run, now);
-        new JobRecord(job.Id.ToString(System.Globalization.CultureInfo.InvariantCulture), job.Name, workerId, job.Attempt, job.ClaimedAt, now, run.Interrupted, Final: !requeue).Write(folder);
-        var result = ResultPackage.From(run, folder, job.Spec.ExperimentId is null ? null : plan.Seconds);
+        new JobRecord(job.Id.ToString(System.Globalization.CultureInfo.InvariantCulture), job.Name, workerId, job.Attempt, job.ClaimedAt, now, result.Interrupted, Final: !requeue).Write(folder);
+        result = result with { Files = ResultPackage.FilesIn(folder) };
 
         var (written, accepted) = await PersistAsync(job, ct => store.CompleteAsync(job, result, requeue ? ClaimEnd.Requeued : ClaimEnd.Done, ct), stop);
         if (written && !accepted)
@@ -98,10 +126,38 @@ public sealed class QueueJobProcessor(
         }
         else if (written)
         {
-            string outcome = !run.Interrupted ? "solved" : requeue ? "interrupted (plan stored, job queued again)" : "interrupted (kept as its result)";
-            QueueLog.JobStored(log, job.Id, outcome, result.Solver, result.Objective, result.Feasible ? "feasible" : "infeasible", result.Vehicles, result.Seconds);
+            string said = !result.Interrupted ? "solved" : requeue ? "interrupted (plan stored, job queued again)" : "interrupted (kept as its result)";
+            QueueLog.JobStored(log, job.Id, said, result.Solver, result.Objective, result.Feasible ? "feasible" : "infeasible", result.Vehicles, result.Seconds);
         }
     }
+
+    /// <summary>The search in this process (Isolation: InProcess): a native crash here ends the worker.</summary>
+    private Ran InProcess(JobPlan plan, string folder, double? benchBudget, QueueProgress progress, CancellationToken stop)
+    {
+        var run = runner.Run(plan, progress.Report, stop);
+        writer.Write(folder, run, clock.GetUtcNow());
+        return new Solved(ResultPackage.From(run, folder, benchBudget));
+    }
+
+    /// <summary>The search in its own process (Isolation: Process, the default): its crash, kill or hang is this job's failure only.</summary>
+    private Ran InChild(JobPlan plan, JobRequest request, string located, string scratch, string folder, double? benchBudget, QueueProgress progress, CancellationToken stop)
+    {
+        string package = Path.Combine(scratch, "package.json");
+        var args = new List<string>(ChildSide.Arguments(Path.GetFullPath(located), folder, request, clock.GetUtcNow())) { "--package", package };
+        if (benchBudget is { } budget)
+        {
+            args.AddRange(["--bench-budget", budget.ToString("R", System.Globalization.CultureInfo.InvariantCulture)]);
+        }
+
+        var outcome = child.Run(args, ChildRun.Deadline(plan.Seconds, options.HangGraceSeconds), TimeSpan.FromSeconds(options.ShutdownTimeoutSeconds), progress.Report, stop);
+        return outcome is ChildOutcome.Completed ? new Solved(ResultPackage.Load(package, folder)) : new NotSolved(outcome);
+    }
+
+    private abstract record Ran;
+
+    private sealed record Solved(ResultPackage Package) : Ran;
+
+    private sealed record NotSolved(ChildOutcome Outcome) : Ran;
 
     /// <summary>
     /// Runs a database step until it succeeds, waiting with backoff while the database does not answer; once the worker

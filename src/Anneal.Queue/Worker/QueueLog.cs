@@ -78,4 +78,8 @@ internal static partial class QueueLog
 
     [LoggerMessage(EventId = 2519, EventName = "WorkerCannotRun", Level = LogLevel.Critical, Message = "The worker cannot run: {Reason}")]
     public static partial void WorkerCannotRun(ILogger log, string reason);
+
+    [LoggerMessage(EventId = 2520, EventName = "SolverProcessFailed", Level = LogLevel.Error,
+        Message = "Job {JobId} failed in its solver process: {Reason}; marked failed, and the worker goes on")]
+    public static partial void SolverFailed(ILogger log, long jobId, string reason);
 }

@@ -16,7 +16,7 @@ namespace Anneal.Queue.Worker;
 /// retried with backoff; running searches go on meanwhile.
 /// </summary>
 public sealed class QueueWorkerService(
-    IOptions<WorkerOptions> options, IOptions<QueueOptions> queueOptions, WorkerRun run, JobRunner runner, RunWriter writer,
+    IOptions<WorkerOptions> options, IOptions<QueueOptions> queueOptions, WorkerRun run, JobRunner runner, RunWriter writer, Anneal.Worker.Isolation.SolverProcess solverProcess,
     IHostApplicationLifetime lifetime, ILoggerFactory logs, TimeProvider clock)
     : BackgroundService
 {
@@ -77,7 +77,7 @@ public sealed class QueueWorkerService(
         }
 
         var claims = new Claims(db, me);
-        var processor = new QueueJobProcessor(o, q, claims, new ResultStore(db, me), runner, writer, me, _log, clock);
+        var processor = new QueueJobProcessor(o, q, claims, new ResultStore(db, me), runner, writer, new Anneal.Worker.Isolation.ChildRun(solverProcess), me, _log, clock);
         QueueLog.WorkerStarted(_log, me, ConnectionText.Describe(connection), o.ConcurrentJobs, o.TimeSeconds, q.LeaseSeconds, run.Once ? "; stops when the queue is empty" : string.Empty);
         await using var wakeup = new Wakeup(db, q, o.PollSeconds, _log, clock);
 

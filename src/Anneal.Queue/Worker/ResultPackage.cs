@@ -1,3 +1,5 @@
+using System.Text.Json;
+using System.Text.Json.Serialization;
 using Anneal.Core.Model;
 using Anneal.Jobs;
 using Anneal.Queue.Inputs;
@@ -25,13 +27,7 @@ public sealed record ResultPackage(
     /// <summary>The run's files as its artifact writers left them in <paramref name="folder"/>, plus its verdict and plan rows.</summary>
     public static ResultPackage From(JobRun run, string folder, double? budgetSeconds)
     {
-        var files = new List<StoredFile>();
-        foreach (var path in Directory.EnumerateFiles(folder, "*", SearchOption.AllDirectories))
-        {
-            files.Add(new StoredFile(Path.GetRelativePath(folder, path).Replace(Path.DirectorySeparatorChar, '/'), File.ReadAllBytes(path)));
-        }
-
-        files.Sort((a, b) => string.CompareOrdinal(a.Path, b.Path));
+        var files = FilesIn(folder);
         var best = run.Outcome.Best;
         var plan = best.Evaluation;
         var instance = run.Instance;
@@ -62,6 +58,36 @@ public sealed record ResultPackage(
 
         return new ResultPackage(instance.Name, best.Result.Solver, instance.Objective.ToText(), plan.Objective, plan.Distance, plan.Duration, plan.VehiclesUsed,
             plan.Feasible, plan.Unserved.Count, run.Interrupted, seconds, summary, files, rows, bench);
+    }
+
+    /// <summary>
+    /// Saves everything but the files, for the worker that started this run in its own process (`anneal run-job
+    /// --package`): it reads the package back with <see cref="Load"/> and the files from the run's folder.
+    /// </summary>
+    public void Save(string path) =>
+        Formats.Output.AtomicFile.Write(path, stream => JsonSerializer.Serialize(stream, this with { Files = [] }, Json));
+
+    /// <exception cref="IOException">when the file or the folder cannot be read.</exception>
+    /// <exception cref="JsonException">when the file is not a package.</exception>
+    public static ResultPackage Load(string path, string folder)
+    {
+        var package = JsonSerializer.Deserialize<ResultPackage>(File.ReadAllBytes(path), Json) ?? throw new JsonException($"{path} holds no result");
+        return package with { Files = FilesIn(folder) };
+    }
+
+    private static readonly JsonSerializerOptions Json = new() { NumberHandling = JsonNumberHandling.AllowNamedFloatingPointLiterals };
+
+    /// <summary>Every file under <paramref name="folder"/>, by relative path with '/' (the order is ordinal).</summary>
+    public static List<StoredFile> FilesIn(string folder)
+    {
+        var files = new List<StoredFile>();
+        foreach (var path in Directory.EnumerateFiles(folder, "*", SearchOption.AllDirectories))
+        {
+            files.Add(new StoredFile(Path.GetRelativePath(folder, path).Replace(Path.DirectorySeparatorChar, '/'), File.ReadAllBytes(path)));
+        }
+
+        files.Sort((a, b) => string.CompareOrdinal(a.Path, b.Path));
+        return files;
     }
 
     public static string MediaType(string name) => Path.GetExtension(name).ToLowerInvariant() switch

@@ -14,6 +14,9 @@ public sealed class ChildRun(SolverProcess executable)
 {
     private const int StderrKept = 5;
 
+    /// <summary>A search that has not ended a generous while after its budget is taken to hang: the grace, or a quarter of the budget if longer.</summary>
+    public static TimeSpan Deadline(double budgetSeconds, double graceSeconds) => TimeSpan.FromSeconds(budgetSeconds + Math.Max(graceSeconds, budgetSeconds / 4));
+
     /// <param name="arguments">The arguments after the executable (the command and its options).</param>
     /// <param name="deadline">Budget plus grace: past it the process counts as hung.</param>
     /// <param name="shutdown">How long a process asked to stop (SIGTERM) may take before it is killed.</param>

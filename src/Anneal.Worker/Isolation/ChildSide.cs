@@ -24,23 +24,47 @@ public static partial class ChildSide
     public const string AbortSwitch = "ANNEAL_TEST_ABORT_IN";
 
     /// <summary>The arguments after the executable that make it the solver process of one job.</summary>
-    /// <param name="claimedAt">When the job's budget began: its whole run, this process's start-up included, keeps within it.</param>
+    /// <param name="claimedAt">
+    /// When the job's budget began: with <see cref="JobRequest.WholeRun"/>, its whole run, this process's start-up
+    /// included, keeps within it; otherwise the budget is the solvers' own.
+    /// </param>
     public static IReadOnlyList<string> Arguments(string input, string output, JobRequest request, DateTimeOffset claimedAt)
     {
-        var args = new List<string> { Command, input, "--out", output, "--default-time", request.DefaultTimeSeconds.ToString("R", CultureInfo.InvariantCulture),
+        var args = new List<string> { Command, input, "--out", output, "--default-time", Number(request.DefaultTimeSeconds),
             "--threads", request.Threads.ToString(CultureInfo.InvariantCulture), "--claimed-at", claimedAt.ToString("O", CultureInfo.InvariantCulture) };
-        if (request.Solvers is { } solvers)
+        Add(args, "--solvers", request.Solvers);
+        Add(args, "--time", request.TimeSeconds is { } time ? Number(time) : null);
+        Add(args, "--iterations", request.Iterations?.ToString(CultureInfo.InvariantCulture));
+        Add(args, "--target", request.Target is { } target ? Number(target) : null);
+        Add(args, "--objective", request.Objective?.ToText());
+        Add(args, "--seed", request.Seed?.ToString(CultureInfo.InvariantCulture));
+        if (!request.WholeRun)
         {
-            args.Add("--solvers");
-            args.Add(solvers);
+            args.Add(SearchBudget);
         }
 
         return args;
     }
 
+    /// <summary>The budget is the solvers' own (not the whole run's, files included), as the database worker asks.</summary>
+    public const string SearchBudget = "--search-budget";
+
+    private static void Add(List<string> args, string option, string? value)
+    {
+        if (value is not null)
+        {
+            args.Add(option);
+            args.Add(value);
+        }
+    }
+
+    private static string Number(double value) => value.ToString("R", CultureInfo.InvariantCulture);
+
+    /// <param name="written">Called after the run's files are written, before the result is reported (the database worker's package).</param>
     /// <returns>0 when the files are written (130 when the search was cut short).</returns>
     /// <exception cref="InputException">when the job cannot be read.</exception>
-    public static int Run(JobRunner runner, RunWriter writer, string input, string output, JobRequest request, TextWriter stdout, TimeProvider clock, CancellationToken stop)
+    public static int Run(JobRunner runner, RunWriter writer, string input, string output, JobRequest request, TextWriter stdout, TimeProvider clock, CancellationToken stop,
+        Action<JobRun>? written = null)
     {
         var loaded = InputLoader.Load(input);
         var plan = runner.Prepare(loaded, request);
@@ -54,6 +78,7 @@ public static partial class ChildSide
         try
         {
             writer.Write(output, run, clock.GetUtcNow());
+            written?.Invoke(run);
         }
         catch (Exception e) when (Formats.Output.DiskFull.Is(e))
         {

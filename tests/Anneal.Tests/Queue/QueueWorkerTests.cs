@@ -71,7 +71,11 @@ public sealed class QueueWorkerTests(PostgresCluster cluster) : QueueTest(cluste
         Init();
         var paths = Enumerable.Range(1, 60).Select(k => WorkerJobs.WriteValid(Path.Combine(Dir, "jobs", $"depot-{k:00}"), 100 + k)).ToArray();
         Submit(["--time", "5", "--iterations", "3000", "--solvers", "sa", .. paths]);
-        var fast = new Dictionary<string, string> { ["ANNEAL_Queue__LeaseSeconds"] = "3", ["ANNEAL_Queue__HeartbeatSeconds"] = "0.5", ["ANNEAL_Worker__MaxRetries"] = "20" };
+        // In the worker's process: this is about claims and leases, and 60 solver processes would cost minutes here.
+        var fast = new Dictionary<string, string>
+        {
+            ["ANNEAL_Queue__LeaseSeconds"] = "3", ["ANNEAL_Queue__HeartbeatSeconds"] = "0.5", ["ANNEAL_Worker__MaxRetries"] = "20", ["ANNEAL_Worker__Isolation"] = "InProcess",
+        };
         var workers = new[] { Worker(fast), Worker(fast), Worker(fast) };
         try
         {
@@ -103,6 +107,34 @@ public sealed class QueueWorkerTests(PostgresCluster cluster) : QueueTest(cluste
 
         Assert.Equal(0, Status().GetProperty("failed").GetInt32());
         AssertExactlyOnce(60);
+    }
+
+    [SkippableFact]
+    public void A_solver_process_that_aborts_fails_its_job_once_with_the_reason_and_the_worker_solves_the_next()
+    {
+        // Issue 19: as the folder worker, each job's search runs in `anneal run-job`; the process aborts itself (libc
+        // abort(), as a failed check in native code does) when sa begins, so the second job uses tabu.
+        Init();
+        long crash = Submit("--time", "60", "--solvers", "sa", WorkerJobs.WriteValid(Path.Combine(Dir, "crash"), 5))[0];
+        long after = Submit("--time", "1", "--iterations", "500", "--solvers", "tabu", WorkerJobs.WriteValid(Path.Combine(Dir, "after"), 6))[0];
+
+        using (var worker = Worker(new() { [global::Anneal.Worker.Isolation.ChildSide.AbortSwitch] = "sa" }, "--once"))
+        {
+            Assert.True(worker.WaitForExit(120) == 0, worker.Log);
+            Assert.Contains($"Job {crash} failed in its solver process", worker.Log, StringComparison.Ordinal);
+        }
+
+        Assert.Equal("failed", Scalar<string>($"SELECT state FROM jobs WHERE id = {crash}"));
+        string error = Scalar<string>($"SELECT error FROM jobs WHERE id = {crash}");
+        Assert.Contains("the solver process ended with signal 6", error, StringComparison.Ordinal);
+        Assert.Contains("in the sa phase", error, StringComparison.Ordinal);
+
+        // Failed once, at once: no retry spent on a crash the same input would repeat.
+        Assert.Equal(1, Scalar<int>($"SELECT attempt FROM jobs WHERE id = {crash}"));
+        Assert.Equal(1L, Scalar<long>($"SELECT count(*) FROM job_events WHERE job_id = {crash} AND event = 'failed'"));
+        Assert.Equal("done", Scalar<string>($"SELECT state FROM jobs WHERE id = {after}"));
+        Assert.Equal(0L, Scalar<long>($"SELECT count(*) FROM results WHERE job_id = {crash}"));
+        Assert.True(Scalar<long>($"SELECT count(*) FROM plan_rows WHERE job_id = {after}") > 0);
     }
 
     [SkippableFact]
