@@ -22,6 +22,11 @@ public static class FileTrouble
             return "permission to write there is denied";
         }
 
+        if (Output.DiskFull.Is(e))
+        {
+            return "the disk is full (no space left on the device); free some space, or write elsewhere (--out)";
+        }
+
         if (e is ArgumentException or NotSupportedException or PathTooLongException)
         {
             return "the path is not a valid name";

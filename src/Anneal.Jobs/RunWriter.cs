@@ -8,7 +8,11 @@ using Anneal.Formats.Output.Artifacts;
 
 namespace Anneal.Jobs;
 
-/// <summary>Writes a run's files into its folder through the host's artifact writers, in the order they were registered.</summary>
+/// <summary>
+/// Writes a run's files into its folder through the host's artifact writers, in the order they were registered: all of
+/// them or none. They are written into a hidden folder inside it first and moved up only when every one is complete,
+/// so a full disk (or any write failure) midway leaves the folder as it was, not a plan without its summary.
+/// </summary>
 public sealed class RunWriter(IEnumerable<IRunArtifact> artifacts)
 {
     private readonly List<IRunArtifact> _artifacts = [.. artifacts];
@@ -32,13 +36,39 @@ public sealed class RunWriter(IEnumerable<IRunArtifact> artifacts)
             summary = summary with { Changes = Describe(replan, changes) };
         }
 
-        var context = new RunContext(folder, input, instance, plan, outcome, summary) { Replan = replan, Changes = changes };
-        foreach (var artifact in _artifacts)
+        string staging = Path.Combine(folder, $".writing-{Guid.NewGuid():N}");
+        try
         {
-            artifact.Write(context);
-        }
+            Directory.CreateDirectory(staging);
+            var context = new RunContext(staging, input, instance, plan, outcome, summary) { Replan = replan, Changes = changes };
+            foreach (var artifact in _artifacts)
+            {
+                artifact.Write(context);
+            }
 
-        return context.Summary;
+            // Renames within one folder need no space; only now does any file of this run appear.
+            foreach (var file in Directory.GetFiles(staging))
+            {
+                File.Move(file, Path.Combine(folder, Path.GetFileName(file)), overwrite: true);
+            }
+
+            return context.Summary;
+        }
+        catch (Exception e) when (e is IOException or UnauthorizedAccessException or OutputException)
+        {
+            throw OutputException.NothingKept(e as OutputException ?? OutputException.For(folder, e), folder, staging);
+        }
+        finally
+        {
+            try
+            {
+                Directory.Delete(staging, recursive: true);
+            }
+            catch (Exception e) when (e is IOException or UnauthorizedAccessException)
+            {
+                // Nothing was created, or the original error matters more than a leftover hidden folder.
+            }
+        }
     }
 
     public static ChangesSummary Describe(ResidualDay replan, DayChanges changes)

@@ -27,4 +27,14 @@ public sealed class OutputException : Exception
     /// <summary>A folder that cannot be created, in a plain sentence.</summary>
     public static OutputException ForFolder(string path, Exception inner) =>
         new($"the folder {path} cannot be created: {FileTrouble.Writing(path, inner)}", inner) { Path = path };
+
+    /// <summary>
+    /// The same failure, saying that the run's folder was left as it was (no file of the run in it); the file is named
+    /// where it was to appear, not in the hidden <paramref name="staging"/> folder it was being written to.
+    /// </summary>
+    public static OutputException NothingKept(OutputException e, string folder, string staging) =>
+        new($"{e.Message.Replace(staging, folder, StringComparison.Ordinal)}; nothing of this run was kept in {folder}", e.InnerException ?? e)
+        {
+            Path = e.Path.Replace(staging, folder, StringComparison.Ordinal),
+        };
 }
