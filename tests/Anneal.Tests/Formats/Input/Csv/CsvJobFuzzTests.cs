@@ -7,12 +7,12 @@ namespace Anneal.Tests.Formats.Input.Csv;
 /// <summary>Random damage to a valid job must give a valid instance or an InputException, never anything else.</summary>
 public class CsvJobFuzzTests
 {
-    private static readonly string[] Files = ["stops.csv", "depots.csv", "vehicles.csv", "matrix.csv", "settings.json"];
+    internal static readonly string[] Files = ["stops.csv", "depots.csv", "vehicles.csv", "matrix.csv", "settings.json"];
 
     private static readonly string[] Garbage =
         ["", "-1", "25:99", "abc", "\"", "1e999", "NaN", "99999999999", "08:00-", ";", "\u00e9\u00e8", "\u0000", "47:59", "-", "1,2", "{", "}", "yes", "hub", "cold"];
 
-    private static readonly Gen<(int File, int Kind, int A, int B)> Mutation =
+    internal static readonly Gen<(int File, int Kind, int A, int B)> Mutation =
         Gen.Select(Gen.Int[0, Files.Length - 1], Gen.Int[0, 9], Gen.Int[0, 400], Gen.Int[0, 400]);
 
     [Fact]
@@ -62,7 +62,7 @@ public class CsvJobFuzzTests
         }, iter: 1, threads: 1, seed: "0N0XIzNsQ0O2");
     }
 
-    private static Dictionary<string, byte[]> Base()
+    internal static Dictionary<string, byte[]> Base()
     {
         var text = JobFolder.ValidPlanar();
         text["matrix.csv"] = "from,to,distance,duration\nhub,s1,5,10\nhub,s2,10,20\nhub,s3,10,20\ns1,s2,5,10\ns1,s3,6.7,13\ns2,s3,6.3,0:13\n";
@@ -75,7 +75,7 @@ public class CsvJobFuzzTests
         return result;
     }
 
-    private static void Apply(Dictionary<string, byte[]> files, (int File, int Kind, int A, int B) m)
+    internal static void Apply(Dictionary<string, byte[]> files, (int File, int Kind, int A, int B) m)
     {
         var name = Files[m.File];
         if (!files.TryGetValue(name, out var bytes))
