@@ -33,7 +33,7 @@ public sealed class OrToolsSolver : ISolver, ISolverAdvice
 
     public string Name => "ortools";
 
-    public string? Declines(Instance instance) => null;
+    public string? Declines(Instance instance) => DrivingRulesSupport.Declines(instance);
 
     public string? LeftOutOfDefaults(Instance instance) => instance.StopCount <= DefaultStopLimit ? null : FormattableString.Invariant(
         $"ortools is left out of the default solvers above {DefaultStopLimit:N0} stops (this job has {instance.StopCount:N0}): its model would need about {ExpectedMegabytes(instance):N0} MB and its search rarely improves on the construction it starts from at this size; name it in --solvers to run it anyway");

@@ -19,7 +19,7 @@ public static class CostModel
         var c = instance.Costs;
         return c.Base[vehicle] + (m.Distance * c.PerDistance[vehicle]) + (m.Duration * c.PerTime[vehicle])
             + (m.TimeWindowViolation * c.SoftTimeWindow) + (m.Overload * c.SoftCapacity)
-            + (m.Overtime * c.SoftOvertime) + (m.DurationExcess * c.SoftDuration);
+            + (m.Overtime * c.SoftOvertime) + (m.DurationExcess * c.SoftDuration) + (m.DrivingOver * c.DrivingPrice[vehicle]);
     }
 
     /// <summary>Weighted amount by which the route breaks hard rules (zero for a feasible route).</summary>
@@ -33,7 +33,10 @@ public static class CostModel
         var c = instance.Costs;
         return ((m.MissingEquipment + m.PairBreaks) * w.Equipment) + (m.TimeWindowViolation * c.HardTimeWindow * w.TimeWindow)
             + (m.Overload * c.HardCapacity * w.Capacity) + (m.Overtime * c.HardOvertime * w.Overtime)
-            + (m.DurationExcess * c.HardDuration * w.Duration);
+            + (m.DurationExcess * c.HardDuration * w.Duration)
+
+            // Hard driving rules (the day's driving, the duty span) are time limits like the maximum duration and share its price.
+            + (m.DrivingBreach * w.Duration);
     }
 
     /// <summary>Search cost of a route: objective part plus weighted hard violations.</summary>
@@ -89,6 +92,7 @@ public static class CostModel
             && m.TimeWindowViolation * c.HardTimeWindow <= tolerance
             && m.Overload * c.HardCapacity <= tolerance
             && m.Overtime * c.HardOvertime <= tolerance
-            && m.DurationExcess * c.HardDuration <= tolerance;
+            && m.DurationExcess * c.HardDuration <= tolerance
+            && m.DrivingBreach <= tolerance;
     }
 }

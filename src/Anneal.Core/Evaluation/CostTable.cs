@@ -15,6 +15,10 @@ public sealed class CostTable
     private readonly double[] _maxDuration;
     private readonly ulong[] _equipment;
 
+    /// <summary>Per vehicle: the price per minute over its driving rules when they are soft, else zero.</summary>
+    internal readonly double[] DrivingPrice;
+    private readonly bool[] _driving;
+
     // Soft prices (zero when the rule is hard) and hard selectors (one when the rule is hard).
     internal readonly double SoftTimeWindow, SoftCapacity, SoftOvertime, SoftDuration;
     internal readonly double HardTimeWindow, HardCapacity, HardOvertime, HardDuration;
@@ -28,6 +32,8 @@ public sealed class CostTable
         _shiftEnd = new double[count];
         _maxDuration = new double[count];
         _equipment = new ulong[count];
+        DrivingPrice = new double[count];
+        _driving = new bool[count];
         for (int k = 0; k < count; k++)
         {
             var v = instance.Vehicles[k];
@@ -37,6 +43,9 @@ public sealed class CostTable
             _shiftEnd[k] = v.ShiftEnd;
             _maxDuration[k] = v.MaxDuration;
             _equipment[k] = v.Equipment;
+            _driving[k] = v.DrivingRules is not null;
+            DrivingRules |= _driving[k];
+            DrivingPrice[k] = v.DrivingRules is { Rule.Hard: false } soft ? soft.Rule.Price : 0;
         }
 
         var rules = instance.Rules;
@@ -63,6 +72,12 @@ public sealed class CostTable
         Objective.Distance => new(0, 1, 0),
         _ => new(instance.VehicleWeight, 1, 0),
     };
+
+    /// <summary>True when some vehicle works under driving rules.</summary>
+    public bool DrivingRules { get; }
+
+    /// <summary>True when the vehicle works under driving rules: its routes are measured by the scheduler, breaks and all.</summary>
+    public bool HasDrivingRules(int vehicle) => _driving[vehicle];
 
     public double ShiftEnd(int vehicle) => _shiftEnd[vehicle];
 

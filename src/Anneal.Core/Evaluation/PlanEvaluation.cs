@@ -14,12 +14,15 @@ public sealed record CostBreakdown
     public double Overload { get; init; }
     public double Overtime { get; init; }
     public double DurationExcess { get; init; }
+
+    /// <summary>Minutes over soft driving rules (the day's driving, the duty span), at each rule set's price.</summary>
+    public double DrivingOver { get; init; }
     public double Unserved { get; init; }
 
     /// <summary>The prices of changing the given plan of a re-plan (stops moved to another vehicle, starts moved beyond the tolerance).</summary>
     public double Stability { get; init; }
 
-    public double Total => Fixed + Distance + Time + Vehicles + Lateness + Overload + Overtime + DurationExcess + Unserved + Stability;
+    public double Total => Fixed + Distance + Time + Vehicles + Lateness + Overload + Overtime + DurationExcess + DrivingOver + Unserved + Stability;
 }
 
 /// <summary>A broken rule: which rule, where, by how much, in words.</summary>
@@ -32,7 +35,11 @@ public sealed record RouteEvaluation(
     VisitTimes[] Visits,
     double[][] LoadAfter,
     double Objective,
-    bool Feasible);
+    bool Feasible)
+{
+    /// <summary>The breaks planned into the route, in order (none without driving rules).</summary>
+    public IReadOnlyList<DrivingRules.PlannedBreak> Breaks { get; init; } = [];
+}
 
 public sealed record PlanEvaluation(
     IReadOnlyList<RouteEvaluation> Routes,

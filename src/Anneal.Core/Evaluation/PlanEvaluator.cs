@@ -1,3 +1,4 @@
+using Anneal.Core.DrivingRules;
 using Anneal.Core.Model;
 using Anneal.Core.Plans;
 
@@ -21,14 +22,15 @@ public static class PlanEvaluator
         var violations = new List<Violation>();
         var served = new bool[instance.StopCount];
         int stranded = 0;
-        double stability = 0, fixedCost = 0, distanceCost = 0, timeCost = 0, vehicles = 0, lateness = 0, overload = 0, overtime = 0, durationExcess = 0;
+        double drivingOver = 0, stability = 0, fixedCost = 0, distanceCost = 0, timeCost = 0, vehicles = 0, lateness = 0, overload = 0, overtime = 0, durationExcess = 0;
         int dims = instance.DimensionCount;
 
         var costs = instance.Costs;
         foreach (var route in plan.Routes)
         {
             var visits = new VisitTimes[route.Stops.Length];
-            var m = RouteScheduler.Schedule(instance, route.Vehicle, route.Stops, visits);
+            var breaks = instance.Vehicles[route.Vehicle].DrivingRules is null ? null : new List<PlannedBreak>();
+            var m = RouteScheduler.Schedule(instance, route.Vehicle, route.Stops, visits, breaks);
             var loads = RouteLoads.After(instance, route.Stops);
             double routeStability = 0;
             for (int k = 0; k < route.Stops.Length; k++)
@@ -40,7 +42,7 @@ public static class PlanEvaluator
             stability += routeStability;
             double objective = CostModel.RouteObjective(instance, route.Vehicle, m) + routeStability;
             bool drivable = CostModel.RouteFeasible(instance, m, Tolerance);
-            routes.Add(new RouteEvaluation(route.Vehicle, route.Stops, m, visits, loads, objective, drivable));
+            routes.Add(new RouteEvaluation(route.Vehicle, route.Stops, m, visits, loads, objective, drivable) { Breaks = breaks ?? [] });
             foreach (int s in route.Stops)
             {
                 stranded += drivable || instance.MayDrop(s) ? 0 : 1;
@@ -85,6 +87,8 @@ public static class PlanEvaluator
                 durationExcess += m.DurationExcess * rules.MaxDuration.Price;
             }
 
+            drivingOver += m.DrivingOver * costs.DrivingPrice[route.Vehicle];
+
             ReportRoute(instance, route, m, visits, loads, violations);
         }
 
@@ -118,6 +122,7 @@ public static class PlanEvaluator
             Overload = overload,
             Overtime = overtime,
             DurationExcess = durationExcess,
+            DrivingOver = drivingOver,
             Unserved = unservedCost,
             Stability = stability,
         };
@@ -192,6 +197,23 @@ public static class PlanEvaluator
         {
             violations.Add(new Violation(RuleKind.MaxDuration, rules.MaxDuration.Hard, v.Id, null, m.DurationExcess,
                 $"route of vehicle {v.Id} lasts {m.DurationExcess:0.##} {unit} longer than allowed"));
+        }
+
+        if (v.DrivingRules is { } driving)
+        {
+            // Never shortened to fit: the route stays as planned and the breach is reported.
+            var (drive, span) = BreakScheduler.Excess(instance, driving, m);
+            if (drive > Tolerance)
+            {
+                violations.Add(new Violation(RuleKind.DrivingTime, driving.Rule.Hard, v.Id, null, drive,
+                    $"vehicle {v.Id} drives {m.Driving:0.##} {unit} in the day, {drive:0.##} {unit} over {driving.Title}"));
+            }
+
+            if (span > Tolerance)
+            {
+                violations.Add(new Violation(RuleKind.DutySpan, driving.Rule.Hard, v.Id, null, span,
+                    $"duty span of vehicle {v.Id} is {m.Return - m.Departure:0.##} {unit}, {span:0.##} {unit} over {driving.Title}"));
+            }
         }
     }
 

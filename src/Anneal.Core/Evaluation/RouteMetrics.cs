@@ -20,4 +20,16 @@ public struct RouteMetrics
 
     /// <summary>Stops whose collect-and-deliver pair this route breaks (see <see cref="RouteLoads.PairBreaks"/>); always a hard rule.</summary>
     public int PairBreaks;
+
+    /// <summary>The day's driving; set only for a vehicle with driving rules (<see cref="DrivingRules.BreakScheduler"/>), else zero.</summary>
+    public double Driving;
+
+    /// <summary>Breaks planned into the route, waits that count as breaks included; zero without driving rules.</summary>
+    public double BreakMinutes;
+
+    /// <summary>Minutes over the day's driving and the duty span of hard driving rules (a hard breach).</summary>
+    public double DrivingBreach;
+
+    /// <summary>The same minutes over when the vehicle's driving rules are soft (priced per minute).</summary>
+    public double DrivingOver;
 }

@@ -1,4 +1,5 @@
 using System.Numerics;
+using Anneal.Core.DrivingRules;
 using Anneal.Core.Model;
 
 namespace Anneal.Core.Evaluation;
@@ -21,7 +22,14 @@ public static class RouteScheduler
         Schedule(instance, vehicle, stops, Span<VisitTimes>.Empty);
 
     /// <summary>Measures the route; when <paramref name="visits"/> is not empty, also writes each stop's times.</summary>
-    public static RouteMetrics Schedule(Instance instance, int vehicle, ReadOnlySpan<int> stops, Span<VisitTimes> visits)
+    public static RouteMetrics Schedule(Instance instance, int vehicle, ReadOnlySpan<int> stops, Span<VisitTimes> visits) =>
+        Schedule(instance, vehicle, stops, visits, null);
+
+    /// <summary>
+    /// As <see cref="Schedule(Instance, int, ReadOnlySpan{int}, Span{VisitTimes})"/>; a vehicle with driving rules has its
+    /// breaks planned (<see cref="BreakScheduler"/>), and written to <paramref name="breaks"/> when given.
+    /// </summary>
+    public static RouteMetrics Schedule(Instance instance, int vehicle, ReadOnlySpan<int> stops, Span<VisitTimes> visits, List<PlannedBreak>? breaks)
     {
         var m = default(RouteMetrics);
         m.StopCount = stops.Length;
@@ -37,17 +45,24 @@ public static class RouteScheduler
 
         double departureDelay = Forward(instance, v, stops, v.ShiftStart, ref m, Span<VisitTimes>.Empty);
         double departure = v.ShiftStart + departureDelay;
-        if (!visits.IsEmpty)
+        if (v.DrivingRules is not null)
         {
-            var check = default(RouteMetrics);
-            Forward(instance, v, stops, departure, ref check, visits);
+            BreakScheduler.Schedule(instance, vehicle, stops, departure, ref m, visits, breaks);
         }
+        else
+        {
+            if (!visits.IsEmpty)
+            {
+                var check = default(RouteMetrics);
+                Forward(instance, v, stops, departure, ref check, visits);
+            }
 
-        m.Departure = departure;
-        double warp = instance.Rules.TimeWindows.Hard ? m.TimeWindowViolation : 0;
-        m.Duration = m.Return - departure + warp;
-        m.Overtime = Math.Max(0, m.Return - v.ShiftEnd);
-        m.DurationExcess = Math.Max(0, m.Duration - v.MaxDuration);
+            m.Departure = departure;
+            double warp = instance.Rules.TimeWindows.Hard ? m.TimeWindowViolation : 0;
+            m.Duration = m.Return - departure + warp;
+            m.Overtime = Math.Max(0, m.Return - v.ShiftEnd);
+            m.DurationExcess = Math.Max(0, m.Duration - v.MaxDuration);
+        }
 
         double overload = RouteLoads.Overload(instance, vehicle, stops);
         m.Overload = overload;
@@ -115,7 +130,7 @@ public static class RouteScheduler
             double leave = start + instance.Service[s];
             if (!visits.IsEmpty)
             {
-                visits[k] = new VisitTimes { Arrival = arrival, Wait = wait, Start = start, Departure = leave, Late = late };
+                visits[k] = new VisitTimes { Arrival = arrival, Wait = wait, Start = start, Departure = leave, Late = late, Drive = travel.Duration(prev, s) };
             }
 
             t = leave;

@@ -12,6 +12,12 @@ public enum RuleKind
 
     /// <summary>A collect-and-deliver pair not served by one vehicle, collection first.</summary>
     Pair,
+
+    /// <summary>More driving in the day than the vehicle's driving rules allow.</summary>
+    DrivingTime,
+
+    /// <summary>A duty span (depot to depot, breaks included) longer than the vehicle's driving rules allow.</summary>
+    DutySpan,
 }
 
 public static class RuleKindNames
@@ -25,6 +31,8 @@ public static class RuleKindNames
         RuleKind.Equipment => "equipment",
         RuleKind.Unserved => "unserved",
         RuleKind.Pair => "pair",
+        RuleKind.DrivingTime => "driving-time",
+        RuleKind.DutySpan => "duty-span",
         _ => throw new ArgumentOutOfRangeException(nameof(rule)),
     };
 }

@@ -8,4 +8,7 @@ public struct VisitTimes
     public double Start;
     public double Departure;
     public double Late;
+
+    /// <summary>Driving since the row before (the stop or a break before it), as routes.csv's <c>drive</c> column holds it.</summary>
+    public double Drive;
 }

@@ -24,4 +24,7 @@ public sealed record Vehicle
     public double CostPerHour { get; init; }
     /// <summary>Bit i set means the vehicle carries item i of <see cref="Instance.EquipmentNames"/> (a cold box, a tail lift).</summary>
     public ulong Equipment { get; init; }
+
+    /// <summary>The drivers'-hours rules the route is planned under (breaks, driving and duty span); null when none.</summary>
+    public DrivingRules.DrivingRuleSet? DrivingRules { get; init; }
 }

@@ -200,6 +200,8 @@ public sealed class MoveEvaluator
             parts.Violation.Duration += Amount(m.DurationExcess, m) - Amount(old.DurationExcess, old);
         }
 
+        // Hard driving rules share the duration's price (see CostModel.RouteViolation).
+        parts.Violation.Duration += Amount(m.DrivingBreach, m) - Amount(old.DrivingBreach, old);
         parts.Violation.Equipment += Amount(m.MissingEquipment, m) - Amount(old.MissingEquipment, old);
         return CostModel.RouteFeasible(_instance, m);
     }

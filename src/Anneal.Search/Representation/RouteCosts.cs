@@ -148,7 +148,7 @@ public sealed class RouteCosts
             v.TimeWindow += rules.TimeWindows.Hard ? m.TimeWindowViolation : 0;
             v.Capacity += rules.Capacity.Hard ? m.Overload : 0;
             v.Overtime += rules.ShiftEnd.Hard ? m.Overtime : 0;
-            v.Duration += rules.MaxDuration.Hard ? m.DurationExcess : 0;
+            v.Duration += (rules.MaxDuration.Hard ? m.DurationExcess : 0) + m.DrivingBreach;
             v.Equipment += m.MissingEquipment;
         }
 

@@ -78,7 +78,7 @@ public sealed class SegmentCache
         _loads = FastPath && instance.HasPickups ? new LoadCache(instance, store) : null;
     }
 
-    /// <summary>Segment concatenation is exact here: hard single windows and at most four dimensions.</summary>
+    /// <summary>Segment concatenation is exact here: hard single windows and at most four dimensions (for vehicles without driving rules).</summary>
     public bool FastPath { get; }
 
     private static double Dim(Instance instance, int stop, int d) => d < instance.DimensionCount ? instance.Demand(stop, d) : 0;
@@ -134,7 +134,12 @@ public sealed class SegmentCache
     }
 
     /// <summary>The measures of the route a draft describes, as the scheduler would give them for its stops.</summary>
-    public RouteMetrics Measure(ref RouteDraft draft) => FastPath ? MeasureBySegments(ref draft) : MeasureByScheduler(ref draft);
+    /// <remarks>
+    /// A vehicle with driving rules is measured by the scheduler, breaks and all: where breaks go depends on the whole
+    /// route, which a segment summary does not hold. Routes of other vehicles keep the concatenation.
+    /// </remarks>
+    public RouteMetrics Measure(ref RouteDraft draft) =>
+        FastPath && !_costs.HasDrivingRules(draft.Route) ? MeasureBySegments(ref draft) : MeasureByScheduler(ref draft);
 
     private RouteMetrics MeasureByScheduler(ref RouteDraft draft)
     {

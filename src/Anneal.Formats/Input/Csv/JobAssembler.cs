@@ -22,7 +22,7 @@ internal static class JobAssembler
         List<string>? dimensions = null;
         if (tables.Vehicles is not null)
         {
-            (vehicles, dimensions) = VehiclesTable.Read(tables.Vehicles, depots?.Ids ?? new IdRegistry(), depots?.Depots.Count ?? 0, equipment, problems);
+            (vehicles, dimensions) = VehiclesTable.Read(tables.Vehicles, depots?.Ids ?? new IdRegistry(), depots?.Depots.Count ?? 0, equipment, problems, settings.Driving);
         }
 
         var offered = tables.Vehicles is null ? null : new HashSet<string>(equipment.Names, StringComparer.OrdinalIgnoreCase);

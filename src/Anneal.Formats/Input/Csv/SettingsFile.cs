@@ -5,7 +5,7 @@ using Anneal.Formats.Input.Json;
 namespace Anneal.Formats.Input.Csv;
 
 /// <summary>settings.json: objective, search budget, solvers, seed, travel speed and hard/soft rules.</summary>
-internal sealed record SettingsFile
+internal sealed partial record SettingsFile
 {
     public const string FileName = "settings.json";
 
@@ -17,6 +17,9 @@ internal sealed record SettingsFile
     public RuleSet Rules { get; init; } = RuleSet.AllHard;
     public double SpeedKmh { get; init; } = DefaultSpeedKmh;
     public double DetourFactor { get; init; } = DefaultDetour;
+
+    /// <summary>The driving-rule sets vehicles may name, and the default (settings.json's <c>drivingRules</c>).</summary>
+    public DrivingBook Driving { get; init; } = DrivingBook.PresetsOnly;
 
     private static readonly string[] TopKeys = SettingsKeys.Top;
     private static readonly string[] TravelKeys = SettingsKeys.Travel;
@@ -51,7 +54,7 @@ internal sealed record SettingsFile
     /// <summary>The settings held by <paramref name="root"/>, an object built from settings.json or from a workbook's settings sheet.</summary>
     public static SettingsFile FromTree(JsonTree root, ProblemSink sink) => new SettingsReader(sink).Top(root);
 
-    private sealed class SettingsReader(ProblemSink sink)
+    private sealed partial class SettingsReader(ProblemSink sink)
     {
         public SettingsFile Top(JsonTree root)
         {
@@ -99,6 +102,9 @@ internal sealed record SettingsFile
                         break;
                     case "stability":
                         stability = Stability(value, line);
+                        break;
+                    case "drivingRules":
+                        result = result with { Driving = DrivingRules(value, line) };
                         break;
                 }
             }

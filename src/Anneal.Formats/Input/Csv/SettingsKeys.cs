@@ -3,7 +3,7 @@ namespace Anneal.Formats.Input.Csv;
 /// <summary>Every key settings.json (and a workbook's settings sheet) accepts; the README's table and the sample list the same.</summary>
 public static class SettingsKeys
 {
-    public static readonly string[] Top = ["objective", "timeSeconds", "solvers", "seed", "travel", "rules", "stability"];
+    public static readonly string[] Top = ["objective", "timeSeconds", "solvers", "seed", "travel", "rules", "stability", "drivingRules"];
 
     public static readonly string[] Travel = ["speedKmh", "detourFactor"];
 
@@ -14,6 +14,16 @@ public static class SettingsKeys
     public static readonly (string Name, string PriceKey)[] Rules =
         [("timeWindows", "pricePerMinute"), ("capacity", "pricePerUnit"), ("shiftEnd", "pricePerMinute"), ("maxDuration", "pricePerMinute"), ("unserved", "pricePerStop")];
 
+    /// <summary>drivingRules' own keys: the default set's name and the sets defined here.</summary>
+    public static readonly string[] Driving = ["default", "sets"];
+
+    /// <summary>The keys of one driving-rule set under drivingRules.sets.NAME.</summary>
+    public static readonly string[] DrivingSet =
+        ["basedOn", "drivingBeforeBreakMinutes", "breakMinutes", "splitFirstMinutes", "splitSecondMinutes", "dailyDrivingMinutes", "dutySpanMinutes", "waitingCounts", "hard", "pricePerMinute"];
+
+    /// <summary>How <see cref="Paths"/> writes a set's name, which the user chooses.</summary>
+    public const string SetName = "<name>";
+
     /// <summary>Every leaf key as a dotted path, e.g. "rules.timeWindows.pricePerMinute".</summary>
     public static IReadOnlyList<string> Paths()
     {
@@ -23,6 +33,11 @@ public static class SettingsKeys
             if (key == "travel")
             {
                 paths.AddRange(Travel.Select(t => "travel." + t));
+            }
+            else if (key == "drivingRules")
+            {
+                paths.Add("drivingRules.default");
+                paths.AddRange(DrivingSet.Select(t => $"drivingRules.sets.{SetName}.{t}"));
             }
             else if (key == "stability")
             {

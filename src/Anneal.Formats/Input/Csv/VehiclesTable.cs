@@ -10,13 +10,13 @@ internal static class VehiclesTable
     private const string CapacityPrefix = "capacity_";
 
     private static readonly string[] Known =
-        ["id", "count", "depot", "end_depot", "shift_start", "shift_end", "max_duration", "fixed_cost", "cost_per_km", "cost_per_hour", "equipment", "available_from", "available_until"];
+        ["id", "count", "depot", "end_depot", "shift_start", "shift_end", "max_duration", "fixed_cost", "cost_per_km", "cost_per_hour", "equipment", "available_from", "available_until", "driving_rules"];
 
     /// <summary>Largest count accepted, so a typo cannot ask for millions of vehicle records.</summary>
     private const int MaxCount = 10_000;
 
     public static (List<Vehicle> Vehicles, List<string> Dimensions) Read(
-        CsvTable table, IdRegistry depots, int depotCount, EquipmentIndex equipment, ProblemList problems)
+        CsvTable table, IdRegistry depots, int depotCount, EquipmentIndex equipment, ProblemList problems, DrivingBook? driving = null)
     {
         HeaderCheck.Check(table, Known, [CapacityPrefix], problems);
         bool hasId = HeaderCheck.Require(table, "id", "a unique name per vehicle type", problems);
@@ -92,6 +92,7 @@ internal static class VehiclesTable
                 CostPerDistance = Cost(cells, "cost_per_km", "the cost per km"),
                 CostPerHour = Cost(cells, "cost_per_hour", "the cost per hour"),
                 Equipment = equipmentBits,
+                DrivingRules = Driving(cells, driving ?? DrivingBook.PresetsOnly),
             };
             for (int k = 1; k <= count; k++)
             {
@@ -111,6 +112,31 @@ internal static class VehiclesTable
         }
 
         return (vehicles, dimensions);
+    }
+
+    /// <summary>The vehicle's driving-rule set: the one its cell names, the job's default when the cell is empty, none for "none".</summary>
+    private static Core.DrivingRules.DrivingRuleSet? Driving(Cells cells, DrivingBook book)
+    {
+        var text = cells.Text("driving_rules");
+        if (text.Length == 0)
+        {
+            return book.Default;
+        }
+
+        if (book.Sets.TryGetValue(text, out var set))
+        {
+            return set;
+        }
+
+        if (string.Equals(text, DrivingBook.None, StringComparison.OrdinalIgnoreCase))
+        {
+            return null;
+        }
+
+        var near = Closest.Find(text, book.Names());
+        cells.Report("driving_rules", text, "unknown driving-rule set",
+            (near is not null ? $"did you mean '{near}'? " : string.Empty) + "use one of " + string.Join(", ", book.Names()) + ", or define the set in settings.json under drivingRules.sets");
+        return null;
     }
 
     private static int Count(Cells cells)

@@ -30,6 +30,7 @@ public class SettingsSampleTests
         Assert.Equal(Rule.Soft(1.5), rules.ShiftEnd);
         Assert.True(rules.Capacity.Hard && rules.MaxDuration.Hard && rules.Unserved.Hard);
         Assert.Equal(250, rules.Unserved.Price);
+        Assert.All(loaded.Instance.Vehicles, v => Assert.Same(Anneal.Core.DrivingRules.DrivingPresets.Eu, v.DrivingRules));
     }
 
     [Fact]
@@ -52,7 +53,9 @@ public class SettingsSampleTests
         {
             if (value.Kind == JsonTokenType.StartObject)
             {
-                Leaves(value, path + key + ".", into);
+                // A driving-rule set's name is the user's: the reader's list writes it as <name>.
+                string name = path == "drivingRules.sets." ? SettingsKeys.SetName : key;
+                Leaves(value, path + name + ".", into);
             }
             else
             {
