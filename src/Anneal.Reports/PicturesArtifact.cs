@@ -6,7 +6,8 @@ namespace Anneal.Reports;
 /// <summary>The pictures and report.html of a run, drawn from the run.json and trace.csv written before them.</summary>
 public sealed class PicturesArtifact : IRunArtifact
 {
-    public void Write(RunContext run) => RunReport.Write(run.Folder, run.Instance, run.Plan);
+    public void Write(RunContext run) =>
+        RunReport.Write(run.Folder, run.Instance, run.Plan, run.Replan is { } day && run.Changes is { } changes ? (day, changes) : null);
 }
 
 public static class ReportServices

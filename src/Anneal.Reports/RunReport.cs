@@ -22,7 +22,8 @@ public static class RunReport
         ScheduleChart.FileStem + ".png", ScheduleChart.FileStem + ".svg", ReportPage.FileName,
     ];
 
-    public static void Write(string folder, Instance instance, PlanEvaluation evaluation)
+    /// <param name="replan">A re-plan's residual day and changes, for its section of the report; null otherwise.</param>
+    public static void Write(string folder, Instance instance, PlanEvaluation evaluation, (Core.Replanning.ResidualDay, Core.Replanning.DayChanges)? replan = null)
     {
         var record = RunRecordFile.Read(Path.Combine(folder, RunRecordFile.FileName));
         var solvers = Solvers(record, ReadTraces(folder));
@@ -40,7 +41,7 @@ public static class RunReport
             schedule = PlotFile.Save(chart, folder, ScheduleChart.FileStem, ScheduleChart.SizeFor(evaluation));
         }
 
-        var input = new ReportInput(instance, evaluation, record, solvers, new ReportPictures(convergence, routes, schedule));
+        var input = new ReportInput(instance, evaluation, record, solvers, new ReportPictures(convergence, routes, schedule)) { Replan = replan };
         ReportPage.Write(Path.Combine(folder, ReportPage.FileName), input);
     }
 

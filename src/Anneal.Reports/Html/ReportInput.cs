@@ -26,6 +26,9 @@ public sealed record ReportInput(Instance Instance, PlanEvaluation Plan, RunReco
         }
     }
 
+    /// <summary>The residual day of a re-plan and what changed against the given plan; null otherwise (and for `anneal plot`).</summary>
+    public (Core.Replanning.ResidualDay Day, Core.Replanning.DayChanges Changes)? Replan { get; init; }
+
     private IReadOnlyList<Obstacle>? _obstacles;
 
     /// <summary>What the input screening finds no plan can do (computed once from the instance).</summary>

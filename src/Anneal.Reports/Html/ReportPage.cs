@@ -42,6 +42,12 @@ public static class ReportPage
         h.Append("<h2>Costs</h2>");
         Breakdown(h, input.Plan.Breakdown);
 
+        if (input.Replan is var (day, changes))
+        {
+            h.Append("<h2>Changes to the given plan</h2>");
+            PlanChanges.Write(h, day, input.Plan, changes);
+        }
+
         h.Append("<h2>What breaks</h2>");
         ProblemLists.Broken(h, input);
         h.Append("<h3>Input screening</h3>");

@@ -130,6 +130,34 @@ public sealed class ReplanTests : CommandTest
     }
 
     [Fact]
+    public void The_report_shows_the_given_and_the_new_plan_side_by_side_for_the_vehicles_that_changed()
+    {
+        // As above: B taken out at 00:15 gives its three stops up; A takes two of them (room for 3: s30 is fixed) and one stays unserved.
+        SolveCommand.Execute(Day(capacity: 3), Request("sa", "report") with { Now = 15, Without = "B" }, Context());
+
+        string page = File.ReadAllText(Path.Combine(Dir, "report", "report.html"));
+        Assert.Contains("<h2>Changes to the given plan</h2>", page, StringComparison.Ordinal);
+        string table = page[page.IndexOf("<table id=\"plan-changes\">", StringComparison.Ordinal)..];
+        table = table[..table.IndexOf("</table>", StringComparison.Ordinal)];
+        var rows = table.Split("<tr><td>").Skip(1).ToDictionary(r => r[..r.IndexOf('<')], r => r.Split("</td><td>"));
+        Assert.Equal(["A", "B"], rows.Keys.Order());
+
+        // B's given plan as the plan file has it, each stop marked where it went; its new plan keeps nothing.
+        string givenB = rows["B"][1];
+        Assert.Contains("00:20 s20", givenB, StringComparison.Ordinal);
+        Assert.Contains("00:40 s40", givenB, StringComparison.Ordinal);
+        Assert.Contains("01:00 s60", givenB, StringComparison.Ordinal);
+        Assert.Equal(2, givenB.Split("moved to A").Length - 1);
+        Assert.Equal(1, givenB.Split("left unserved").Length - 1);
+        Assert.Contains("no stops", rows["B"][2], StringComparison.Ordinal);
+
+        // A's new plan starts with its fixed s10 and s30 (given times) and shows the two stops it took from B.
+        string newA = rows["A"][2];
+        Assert.StartsWith("<div>00:10 s10</div><div>00:30 s30</div>", newA, StringComparison.Ordinal);
+        Assert.Equal(2, newA.Split("from B").Length - 1);
+    }
+
+    [Fact]
     public void Cancelled_stops_appear_in_changes_csv()
     {
         var request = Request("sa", "cancelled") with { From = Plan(Given.Replace("B,stop,s60,01:00,01:00", "B,stop,s60,01:00,01:00\nB,stop,s77,01:10,01:10", StringComparison.Ordinal)) };
