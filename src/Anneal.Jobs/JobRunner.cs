@@ -20,7 +20,7 @@ public sealed class JobRunner(SolverCatalog catalog)
         var instance = objective == input.Instance.Objective ? input.Instance : input.Instance.With(objective: objective);
         Core.Replanning.ResidualDay? replan = null;
         Core.Plans.Plan? start = null;
-        if (request.Replan is { } asked)
+        if ((request.Replan ?? Asked(input)) is { } asked)
         {
             (replan, start) = Replanning.Replanner.Prepare(instance, asked);
             instance = replan.Instance;
@@ -64,6 +64,21 @@ public sealed class JobRunner(SolverCatalog catalog)
             StartPlan = start,
         };
         return new JobPlan(input, instance, solvers, options, seconds, notes) { Replan = replan };
+    }
+
+    /// <summary>
+    /// The re-plan the job asks for itself (settings.json's "replan", its plan file beside the job's files), so that the
+    /// worker and the queue re-plan as `solve --from` does; the command line's --from wins.
+    /// </summary>
+    private static Replanning.ReplanInput? Asked(LoadedInput input)
+    {
+        if (input.Settings.Replan is not { } replan)
+        {
+            return null;
+        }
+
+        string folder = Directory.Exists(input.Path) ? input.Path : Path.GetDirectoryName(Path.GetFullPath(input.Path)) ?? ".";
+        return new Replanning.ReplanInput(Path.Combine(folder, replan.From), replan.Now, replan.Without);
     }
 
     /// <param name="progress">Receives (solver name, trace point) from every solver as it improves, on the solvers' threads.</param>

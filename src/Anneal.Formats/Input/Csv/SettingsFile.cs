@@ -106,6 +106,9 @@ internal sealed partial record SettingsFile
                     case "drivingRules":
                         result = result with { Driving = DrivingRules(value, line) };
                         break;
+                    case "replan":
+                        job = job with { Replan = Replan(value, line) };
+                        break;
                 }
             }
 
@@ -163,6 +166,71 @@ internal sealed partial record SettingsFile
 
             return prices;
         }
+
+        /// <summary>"replan": { "from": "plan.csv", "now": "11:20", "without": ["van-3"] }; "from" names a file of the job folder.</summary>
+        private JobReplan? Replan(JsonTree replan, int line)
+        {
+            if (!Object(replan, line, "replan"))
+            {
+                return null;
+            }
+
+            var result = new JobReplan(DefaultPlanFile, null, []);
+            foreach (var (key, keyLine, value) in Members(replan, SettingsKeys.Replan, "replan."))
+            {
+                switch (key)
+                {
+                    case "from":
+                        string from = value.Kind == JsonTokenType.String ? (value.Text ?? string.Empty).Trim() : string.Empty;
+                        if (from.Length == 0 || from.Contains('/', StringComparison.Ordinal) || from.Contains('\\', StringComparison.Ordinal) || from is "." or "..")
+                        {
+                            Add(keyLine, "replan.from", value.Shown, "not the name of a file in the job folder",
+                                "put the plan (a routes.csv of an earlier run) into the job folder and give its name, e.g. \"from\": \"plan.csv\"");
+                            break;
+                        }
+
+                        result = result with { From = from };
+                        break;
+                    case "now":
+                        if (value.Kind != JsonTokenType.String || value.Text is not { } clock || !TimeText.TryParseTime(clock, out double now))
+                        {
+                            Add(keyLine, "replan.now", value.Shown, "not a clock time", "give the clock time of the job's day that fixes the past as \"HH:MM\" (up to 47:59), e.g. \"now\": \"11:20\"");
+                            break;
+                        }
+
+                        result = result with { Now = now };
+                        break;
+                    default:
+                        var ids = new List<string>();
+                        bool good = value.Kind == JsonTokenType.StartArray;
+                        foreach (var item in good ? value.Items : [])
+                        {
+                            if (item.Kind == JsonTokenType.String && !string.IsNullOrWhiteSpace(item.Text))
+                            {
+                                ids.Add(item.Text.Trim());
+                            }
+                            else
+                            {
+                                good = false;
+                            }
+                        }
+
+                        if (!good)
+                        {
+                            Add(keyLine, "replan.without", value.Shown, "not a list of vehicle ids", "list the vehicles taken out as strings, e.g. \"without\": [\"van-3\"]");
+                            break;
+                        }
+
+                        result = result with { Without = ids };
+                        break;
+                }
+            }
+
+            return result;
+        }
+
+        /// <summary>The plan file of a re-plan when "replan" names none.</summary>
+        public const string DefaultPlanFile = "plan.csv";
 
         private RuleSet Rules(JsonTree rules, int line)
         {

@@ -3,12 +3,14 @@ namespace Anneal.Formats.Input.Csv;
 /// <summary>Every key settings.json (and a workbook's settings sheet) accepts; the README's table and the sample list the same.</summary>
 public static class SettingsKeys
 {
-    public static readonly string[] Top = ["objective", "timeSeconds", "solvers", "seed", "travel", "rules", "stability", "drivingRules"];
+    public static readonly string[] Top = ["objective", "timeSeconds", "solvers", "seed", "travel", "rules", "stability", "drivingRules", "replan"];
 
     public static readonly string[] Travel = ["speedKmh", "detourFactor"];
 
     /// <summary>The prices of changing a given plan in a re-plan (`solve --from`).</summary>
     public static readonly string[] Stability = ["pricePerMove", "pricePerMinute", "toleranceMinutes"];
+
+    public static readonly string[] Replan = ["from", "now", "without"];
 
     /// <summary>Each rule with the name of its price.</summary>
     public static readonly (string Name, string PriceKey)[] Rules =
@@ -42,6 +44,10 @@ public static class SettingsKeys
             else if (key == "stability")
             {
                 paths.AddRange(Stability.Select(t => "stability." + t));
+            }
+            else if (key == "replan")
+            {
+                paths.AddRange(Replan.Select(t => "replan." + t));
             }
             else if (key == "rules")
             {

@@ -31,6 +31,9 @@ public class SettingsSampleTests
         Assert.True(rules.Capacity.Hard && rules.MaxDuration.Hard && rules.Unserved.Hard);
         Assert.Equal(250, rules.Unserved.Price);
         Assert.All(loaded.Instance.Vehicles, v => Assert.Same(Anneal.Core.DrivingRules.DrivingPresets.Eu, v.DrivingRules));
+        Assert.Equal("plan.csv", loaded.Settings.Replan!.From);
+        Assert.Equal(11 * 60 + 20, loaded.Settings.Replan.Now);
+        Assert.Equal(["van-3"], loaded.Settings.Replan.Without);
     }
 
     [Fact]
