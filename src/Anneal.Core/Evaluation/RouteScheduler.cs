@@ -43,7 +43,11 @@ public static class RouteScheduler
         int home = instance.DepotLocation(v.StartDepot);
         int end = instance.DepotLocation(v.EndDepot);
 
-        double departureDelay = Forward(instance, v, stops, v.ShiftStart, ref m, Span<VisitTimes>.Empty);
+        // The times written come from a second pass from the delayed departure, which serves every stop in the window
+        // the first pass chose: the slack allows exactly that, and its rounding (an arrival 3e-14 past a close) must
+        // not move a stop to a later window, which would make the times disagree with the measures.
+        Span<int> windows = visits.IsEmpty ? Span<int>.Empty : stops.Length <= 256 ? stackalloc int[stops.Length] : new int[stops.Length];
+        double departureDelay = Forward(instance, v, stops, v.ShiftStart, ref m, Span<VisitTimes>.Empty, windows, follow: false);
         double departure = v.ShiftStart + departureDelay;
         if (v.DrivingRules is not null)
         {
@@ -54,7 +58,7 @@ public static class RouteScheduler
             if (!visits.IsEmpty)
             {
                 var check = default(RouteMetrics);
-                Forward(instance, v, stops, departure, ref check, visits);
+                Forward(instance, v, stops, departure, ref check, visits, windows, follow: true);
             }
 
             m.Departure = departure;
@@ -86,8 +90,12 @@ public static class RouteScheduler
         return m;
     }
 
-    /// <summary>One pass from <paramref name="departure"/>; fills violation and return time, and returns the forward slack.</summary>
-    private static double Forward(Instance instance, Vehicle v, ReadOnlySpan<int> stops, double departure, ref RouteMetrics m, Span<VisitTimes> visits)
+    /// <summary>
+    /// One pass from <paramref name="departure"/>; fills violation and return time, and returns the forward slack.
+    /// Records each stop's window in <paramref name="windows"/> when it is not empty, or serves each stop in the
+    /// recorded one when <paramref name="follow"/> is set.
+    /// </summary>
+    private static double Forward(Instance instance, Vehicle v, ReadOnlySpan<int> stops, double departure, ref RouteMetrics m, Span<VisitTimes> visits, Span<int> windows, bool follow)
     {
         var travel = instance.Travel;
         bool hard = instance.Rules.TimeWindows.Hard;
@@ -103,9 +111,21 @@ public static class RouteScheduler
             int first = instance.WindowOffset[s];
             int last = instance.WindowOffset[s + 1] - 1;
             int w = first;
-            while (w <= last && instance.WindowClose[w] < arrival)
+            if (follow)
             {
-                w++;
+                w = windows[k];
+            }
+            else
+            {
+                while (w <= last && instance.WindowClose[w] < arrival)
+                {
+                    w++;
+                }
+
+                if (!windows.IsEmpty)
+                {
+                    windows[k] = w;
+                }
             }
 
             double start;

@@ -59,6 +59,16 @@ internal static class RandomInstances
             });
         }
 
+        if (multiWindows && stopList.TrueForAll(s => s.Windows.Length == 1))
+        {
+            // A third of the stops get a second window, so a short instance can draw none (12 stops: 0.8%); one is
+            // given then, so that "several windows" always holds and the instance takes the scheduler's path.
+            // No random draw here: every instance that already had one stays as it was.
+            var last = stopList[^1];
+            double o2 = last.Windows[0].Close + 30;
+            stopList[^1] = last with { Windows = [last.Windows[0], new TimeWindow(o2, o2 + 60)] };
+        }
+
         x[stops] = 50;
         y[stops] = 50;
         var fleet = new List<Vehicle>();
