@@ -51,7 +51,7 @@ public sealed class ExactSolver : ISolver
             return ScalingGuard.Declined(Name, e);
         }
         var trace = new TraceRecorder(progress, options.TimeLimit.TotalSeconds);
-        var keeper = new Keeper(instance, exact, trace, clock);
+        var keeper = new Keeper(instance, exact, trace, clock, options.Incumbent);
 
         // The best known plan (the starting plan given, else Anneal's construction) as a hint when it keeps every
         // hard rule: CP-SAT starts from it, and it is the answer should CP-SAT find nothing better in time.
@@ -163,7 +163,7 @@ public sealed class ExactSolver : ISolver
     }
 
     /// <summary>Judges every CP-SAT solution with Anneal's evaluator and traces the improvements.</summary>
-    private sealed class Keeper(Instance instance, ExactModel exact, TraceRecorder trace, Stopwatch clock) : CpSolverSolutionCallback
+    private sealed class Keeper(Instance instance, ExactModel exact, TraceRecorder trace, Stopwatch clock, Incumbent? incumbent) : CpSolverSolutionCallback
     {
         public const string HintState = "construction (hint)";
         public const string ConstructionState = "construction";
@@ -198,6 +198,7 @@ public sealed class ExactSolver : ISolver
                 Best = judged;
                 BestPlan = plan;
                 BestIsConstruction = state is HintState or ConstructionState;
+                incumbent?.Offer(plan, judged.Feasible, judged.Objective);
                 trace.Improved(new TracePoint(clock.Elapsed.TotalSeconds, Solutions, judged.Objective, judged.Objective, judged.Feasible, state));
             }
 

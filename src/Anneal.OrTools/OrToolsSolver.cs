@@ -70,7 +70,7 @@ public sealed class OrToolsSolver : ISolver, ISolverAdvice
     {
         var clock = Stopwatch.StartNew();
         var limit = options.TimeLimit;
-        var keeper = new RoutingKeeper(instance, new TraceRecorder(progress, limit.TotalSeconds), clock);
+        var keeper = new RoutingKeeper(instance, new TraceRecorder(progress, limit.TotalSeconds), clock, options.Incumbent);
         using var budget = CancellationTokenSource.CreateLinkedTokenSource(cancel);
         budget.CancelAfter(limit);
 

@@ -10,7 +10,7 @@ namespace Anneal.OrTools;
 /// The best plan of a routing run by Anneal's evaluator, offered from the native search thread and read by the
 /// thread that waits for it; once closed, late offers (from a search that overran and was left) are ignored.
 /// </summary>
-internal sealed class RoutingKeeper(Instance instance, TraceRecorder trace, Stopwatch clock)
+internal sealed class RoutingKeeper(Instance instance, TraceRecorder trace, Stopwatch clock, Incumbent? incumbent)
 {
     private readonly object _gate = new();
     private bool _closed;
@@ -47,6 +47,7 @@ internal sealed class RoutingKeeper(Instance instance, TraceRecorder trace, Stop
                 Best = judged;
                 BestPlan = plan;
                 BestSource = source;
+                incumbent?.Offer(plan, judged.Feasible, judged.Objective);
                 trace.Improved(new TracePoint(clock.Elapsed.TotalSeconds, Solutions, judged.Objective, judged.Objective, judged.Feasible, source));
             }
 

@@ -6,7 +6,8 @@ namespace Anneal.Core.Solving;
 /// <summary>
 /// Runs several solvers side by side on one instance with the same wall-clock budget. A solver still running
 /// <see cref="Grace"/> past its budget (or past a stop request) is no longer waited for: the run goes on with the
-/// others' plans, and that solver is reported without one.
+/// others' plans, and that solver is reported as overrun with the best plan it had offered to its
+/// <see cref="Incumbent"/> (none if it offered none).
 /// </summary>
 public static class RunCoordinator
 {
@@ -33,7 +34,8 @@ public static class RunCoordinator
         var token = giveUp.Token;
         var results = new SolverResult?[solvers.Count];
         var traces = new List<TracePoint>[solvers.Count];
-        var threads = new List<(Thread Thread, int Index)>(solvers.Count);
+        var incumbents = new Incumbent[solvers.Count];
+        var threads = new List<Thread>(solvers.Count);
         for (int k = 0; k < solvers.Count; k++)
         {
             var solver = solvers[k];
@@ -44,7 +46,7 @@ public static class RunCoordinator
             }
 
             int index = k;
-            var own = options with { Seed = options.Seed + index };
+            var own = options with { Seed = options.Seed + index, Incumbent = incumbents[k] = new Incumbent() };
             var trace = traces[k] = [];
             IProgress<TracePoint> sink = new SynchronousProgress(p =>
             {
@@ -55,32 +57,20 @@ public static class RunCoordinator
 
                 progress?.Invoke(solver.Name, p);
             });
-            threads.Add((new Thread(() => Volatile.Write(ref results[index], solver.Solve(instance, own, sink, token)))
+            threads.Add(new Thread(() => Volatile.Write(ref results[index], solver.Solve(instance, own, sink, token)))
             {
                 IsBackground = true,
                 Name = "solver " + solver.Name,
-            }, k));
+            });
         }
 
-        foreach (var (t, _) in threads)
+        foreach (var t in threads)
         {
             t.Start();
         }
 
         var grace = Grace(options.TimeLimit);
-        TimeSpan? stopAt = null;
-        foreach (var (t, _) in threads)
-        {
-            while (!t.Join(TimeSpan.FromMilliseconds(50)))
-            {
-                stopAt ??= cancel.IsCancellationRequested ? clock.Elapsed : null;
-                var waitUntil = stopAt is { } at ? Min(at, options.TimeLimit) + grace : options.TimeLimit + grace;
-                if (clock.Elapsed > waitUntil)
-                {
-                    break;
-                }
-            }
-        }
+        DeadlineJoin.Wait(threads, options.TimeLimit, grace, clock, cancel);
 
         var judged = new JudgedResult[results.Length];
         bool left = false;
@@ -100,7 +90,7 @@ public static class RunCoordinator
 
         for (int k = 0; k < results.Length; k++)
         {
-            var result = Volatile.Read(ref results[k]) ?? Overran(solvers[k].Name, clock.Elapsed, traces[k], grace, cancel.IsCancellationRequested);
+            var result = Volatile.Read(ref results[k]) ?? Overran(solvers[k].Name, clock.Elapsed, traces[k], incumbents[k]?.Plan, grace, cancel.IsCancellationRequested);
             judged[k] = judge(instance, result);
         }
 
@@ -119,8 +109,8 @@ public static class RunCoordinator
         return PlanRanking.Best(ranked);
     }
 
-    /// <summary>A solver that did not return in time: its trace so far, no plan (it holds it), and why.</summary>
-    private static SolverResult Overran(string solver, TimeSpan elapsed, List<TracePoint> trace, TimeSpan grace, bool interrupted)
+    /// <summary>A solver that did not return in time: its trace so far, the best plan it had offered (if any), and why.</summary>
+    private static SolverResult Overran(string solver, TimeSpan elapsed, List<TracePoint> trace, Plans.Plan? incumbent, TimeSpan grace, bool interrupted)
     {
         TracePoint[] points;
         lock (trace)
@@ -128,12 +118,10 @@ public static class RunCoordinator
             points = [.. trace];
         }
 
-        string reason = FormattableString.Invariant($"did not stop within {grace.TotalSeconds:0.#} s of its {(interrupted ? "stop request" : "budget")}; the run went on without its plan");
-        return new SolverResult(solver, Plans.Plan.Empty, elapsed.TotalSeconds, points.Length > 0 ? points[^1].Seconds : 0, points,
-            interrupted ? SolverStatus.Interrupted : SolverStatus.TimeLimit, null, [reason]) { HasPlan = false };
+        string reason = FormattableString.Invariant($"did not stop within {grace.TotalSeconds:0.#} s of its {(interrupted ? "stop request" : "budget")}; the run went on without waiting, {(incumbent is null ? "and it had offered no plan" : "with the best plan it had offered by then")}");
+        return new SolverResult(solver, incumbent ?? Plans.Plan.Empty, elapsed.TotalSeconds, points.Length > 0 ? points[^1].Seconds : 0, points,
+            SolverStatus.Overran, null, [reason]) { HasPlan = incumbent is not null };
     }
-
-    private static TimeSpan Min(TimeSpan a, TimeSpan b) => a < b ? a : b;
 
     private sealed class SynchronousProgress(Action<TracePoint> report) : IProgress<TracePoint>
     {

@@ -22,4 +22,10 @@ public sealed record SolveOptions
     /// as its initial assignment and CP-SAT as its hint.
     /// </summary>
     public Plans.Plan? StartPlan { get; init; }
+
+    /// <summary>
+    /// Where a solver offers its best plan as it goes (null: nobody asks). The run reports it should the solver not
+    /// return in time; the copies of one solver's --threads share it.
+    /// </summary>
+    public Incumbent? Incumbent { get; init; }
 }

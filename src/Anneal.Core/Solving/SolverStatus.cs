@@ -24,6 +24,12 @@ public enum SolverStatus
     /// <summary>"interrupted": Ctrl+C, SIGTERM or a stop request cut it short; its best plan so far is kept.</summary>
     Interrupted,
 
+    /// <summary>
+    /// "overran": it did not return within the tolerance past its budget or a stop request, and the run went on
+    /// without waiting; its plan, if any, is the best it had reported by then.
+    /// </summary>
+    Overran,
+
     /// <summary>"no solution": it ended without any plan.</summary>
     NoSolution,
 
@@ -41,6 +47,7 @@ public static class SolverStatusNames
         SolverStatus.TimeLimit => "time limit",
         SolverStatus.TargetReached => "target reached",
         SolverStatus.Interrupted => "interrupted",
+        SolverStatus.Overran => "overran",
         SolverStatus.NoSolution => "no solution",
         SolverStatus.Declined => "declined",
         _ => throw new ArgumentOutOfRangeException(nameof(status)),

@@ -1,43 +1,96 @@
+using System.Diagnostics;
 using Anneal.Core.Evaluation;
 using Anneal.Core.Model;
+using Anneal.Core.Plans;
 using Anneal.Core.Solving;
 
 namespace Anneal.Search.Running;
 
-/// <summary>Runs independent seeded copies of a solver on separate threads and keeps the best plan.</summary>
+/// <summary>
+/// Runs independent seeded copies of a solver on separate threads and keeps the best plan. The copies share the
+/// run's <see cref="Incumbent"/>; a copy that has not returned <see cref="Slack"/> past the budget (many copies on
+/// few cores: one step of each can then take seconds) is not waited for, and the best plan the copies offered
+/// stands in for it, so the solver returns within its budget however many copies it runs.
+/// </summary>
 public static class ParallelRuns
 {
+    /// <summary>How long past the budget (or a stop) the copies are waited for: less than the run's own tolerance.</summary>
+    public static readonly TimeSpan Slack = TimeSpan.FromSeconds(1);
+
     public static SolverResult Run(Func<ISolver> create, Instance instance, SolveOptions options, IProgress<TracePoint>? progress, CancellationToken cancel)
     {
+        var clock = Stopwatch.StartNew();
         int n = options.Threads;
-        var results = new SolverResult[n];
+        var incumbent = options.Incumbent ?? new Incumbent();
+        var giveUp = CancellationTokenSource.CreateLinkedTokenSource(cancel); // not disposed when a copy is left: it still reads it
+        var results = new SolverResult?[n];
         var threads = new Thread[n];
         for (int k = 0; k < n; k++)
         {
             int index = k;
-            var own = options with { Threads = 1, Seed = options.Seed + (1000 * index) };
-            threads[k] = new Thread(() => results[index] = create().Solve(instance, own, index == 0 ? progress : null, cancel)) { IsBackground = true };
+            var own = options with { Threads = 1, Seed = options.Seed + (1000 * index), Incumbent = incumbent };
+            threads[k] = new Thread(() => Volatile.Write(ref results[index], create().Solve(instance, own, index == 0 ? progress : null, giveUp.Token))) { IsBackground = true };
             threads[k].Start();
         }
 
-        foreach (var t in threads)
-        {
-            t.Join();
-        }
+        bool all = DeadlineJoin.Wait(threads, options.TimeLimit, Slack, clock, cancel);
 
-        var judged = new PlanEvaluation?[n];
+        // What returned in time, read before the late copies are told to stop (a copy returning after that would
+        // call itself interrupted).
+        var returned = new SolverResult?[n];
+        var judged = new PlanEvaluation?[n + 1];
+        int count = 0;
         for (int k = 0; k < n; k++)
         {
-            judged[k] = results[k].HasPlan ? PlanEvaluator.Evaluate(instance, results[k].Plan) : null;
+            var result = returned[k] = Volatile.Read(ref results[k]);
+            count += result is null ? 0 : 1;
         }
 
-        int best = PlanRanking.Best(judged);
-        if (!results[best].HasPlan)
+        if (all)
         {
-            return results[best];
+            giveUp.Dispose();
+        }
+        else
+        {
+            giveUp.Cancel();
         }
 
-        var notes = new List<string>(results[best].Notes ?? []) { $"best of {n} independent runs (seeds {options.Seed} + 1000·k)" };
-        return results[best] with { Notes = notes };
+        for (int k = 0; k < n; k++)
+        {
+            judged[k] = returned[k] is { HasPlan: true } result ? PlanEvaluator.Evaluate(instance, result.Plan) : null;
+        }
+
+        // The copies left behind hold plans of their own: the best any copy offered stands in for them.
+        var offered = all ? null : incumbent.Plan;
+        judged[n] = offered is null ? null : PlanEvaluator.Evaluate(instance, offered);
+        int best = PlanRanking.Best(judged);
+        string seeds = $"{n} independent runs (seeds {options.Seed} + 1000·k)";
+        string late = FormattableString.Invariant($"{n - count} of the {n} copies did not return within {Slack.TotalSeconds:0.#} s of the {(cancel.IsCancellationRequested ? "stop request" : "budget")} and were not waited for");
+        if (best == n && judged[n] is { } fromOffer)
+        {
+            double seconds = clock.Elapsed.TotalSeconds;
+            var point = new TracePoint(seconds, 0, fromOffer.Objective, fromOffer.Objective, fromOffer.Feasible, "offered");
+            return new SolverResult(create().Name, offered!, seconds, seconds, [point], cancel.IsCancellationRequested ? SolverStatus.Interrupted : SolverStatus.TimeLimit, null,
+                [$"best plan the copies had offered by then, of {seeds}", late]);
+        }
+
+        if (returned[best] is not { } chosen)
+        {
+            // No copy returned and none offered a plan.
+            return new SolverResult(create().Name, Plan.Empty, clock.Elapsed.TotalSeconds, 0, [], SolverStatus.NoSolution, null, [late]) { HasPlan = false };
+        }
+
+        if (!chosen.HasPlan)
+        {
+            return chosen;
+        }
+
+        var notes = new List<string>(chosen.Notes ?? []) { $"best of {seeds}" };
+        if (!all)
+        {
+            notes.Add(late);
+        }
+
+        return chosen with { Notes = notes };
     }
 }

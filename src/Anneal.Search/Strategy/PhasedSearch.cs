@@ -20,6 +20,7 @@ public sealed class PhasedSearch
     private long _iteration;
     private double _lastImprovedAt;
     private bool _polishing;
+    private double _offeredAt = double.NegativeInfinity;
 
     private PhasedSearch(SearchStart start, SearchRun run, ILocalSearch search)
     {
@@ -55,6 +56,7 @@ public sealed class PhasedSearch
         var (budget, trace, _, state) = _start;
         var keeper = _run.Keeper;
         trace.Improved(Point("construction"));
+        Offer();
         _search.Begin();
         FleetSqueeze.Opening(_start, keeper, _run.Phase, _run.Random, _run.Settings.SqueezeShare, _run.Settings.SqueezePatience, _rhythm.WorkPerIteration, out _iteration);
         _lastImprovedAt = budget.Progress(_iteration);
@@ -156,6 +158,28 @@ public sealed class PhasedSearch
         if (trace.SampleDue(budget.Elapsed))
         {
             trace.Sample(Point(_search.Note));
+        }
+
+        if (budget.Elapsed - _offeredAt >= OfferEvery)
+        {
+            Offer();
+        }
+    }
+
+    /// <summary>Seconds between offers of the best plan to the run's incumbent: the plan is copied at most this often.</summary>
+    private const double OfferEvery = 0.25;
+
+    /// <summary>
+    /// Offers the best plan to the run's <see cref="Incumbent"/> when it beats what is held there, so that the run
+    /// still has a plan should this search not return in time. Reads only; the search goes on exactly as without it.
+    /// </summary>
+    private void Offer()
+    {
+        _offeredAt = _start.Budget.Elapsed;
+        var keeper = _run.Keeper;
+        if (_run.Options.Incumbent is { } incumbent && incumbent.Wants(keeper.HasFeasible, keeper.Objective))
+        {
+            incumbent.Offer(keeper.BestPlan(_start.State), keeper.HasFeasible, keeper.Objective);
         }
     }
 

@@ -35,12 +35,66 @@ public sealed class RunDeadlineTests
         Assert.Equal(0, outcome.Chosen);
         var left = outcome.Results[1].Result;
         Assert.False(left.HasPlan);
-        Assert.Equal(SolverStatus.TimeLimit, left.Status);
-        Assert.Contains(left.Notes ?? [], n => n.StartsWith("did not stop within 2 s of its budget", StringComparison.Ordinal));
+        Assert.Equal(SolverStatus.Overran, left.Status);
+        Assert.Contains(left.Notes ?? [], n => n.StartsWith("did not stop within 2 s of its budget", StringComparison.Ordinal) && n.EndsWith("it had offered no plan", StringComparison.Ordinal));
     }
 
-    /// <summary>A solver that never looks at its clock or its token: blocks far past any budget.</summary>
-    private sealed class Sleeper : ISolver
+    [Fact]
+    public void A_solver_left_behind_is_reported_with_the_best_plan_it_had_offered()
+    {
+        var instance = TinyInstances.Random(5, 8, 2);
+        var offered = new InsertionSolver().Solve(instance, new SolveOptions(), null, default).Plan;
+        var outcome = RunCoordinator.Run(instance, [new Sleeper(offered)], new SolveOptions { TimeLimit = TimeSpan.FromSeconds(0.2) }, null, default);
+        var left = outcome.Results[0].Result;
+        Assert.Equal(SolverStatus.Overran, left.Status);
+        Assert.True(left.HasPlan);
+        Assert.Same(offered, left.Plan);
+        Assert.Equal(0, outcome.Chosen);
+        Assert.Contains(left.Notes ?? [], n => n.EndsWith("with the best plan it had offered by then", StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public void Copies_of_a_seeded_search_left_behind_are_not_waited_for_and_their_offers_stand_in()
+    {
+        var instance = TinyInstances.Random(5, 8, 2);
+        var result = new HalfSleeping().Solve(instance, new SolveOptions { TimeLimit = TimeSpan.FromSeconds(0.2), Threads = 2 }, null, default);
+        Assert.True(result.HasPlan);
+        Assert.Equal(SolverStatus.TimeLimit, result.Status);
+        Assert.Contains(result.Notes ?? [], n => n.StartsWith("1 of the 2 copies did not return within 1 s of the budget", StringComparison.Ordinal));
+    }
+
+    [Fact]
+    public void The_local_searches_offer_their_plan_as_they_go()
+    {
+        var instance = TinyInstances.Random(5, 8, 2);
+        var incumbent = new Incumbent();
+        new Anneal.Search.Annealing.SimulatedAnnealing().Solve(instance, new SolveOptions { IterationLimit = 200, Incumbent = incumbent }, null, default);
+        Assert.NotNull(incumbent.Plan);
+        Assert.NotEmpty(incumbent.Plan!.Routes);
+    }
+
+    /// <summary>Copy 0 offers its construction and returns an empty plan; copy 1 offers it too and blocks.</summary>
+    private sealed class HalfSleeping : Anneal.Search.Running.SeededSearch
+    {
+        public override string Name => "half-sleeping";
+
+        public override string? Declines(Instance instance) => null;
+
+        protected override SolverResult SolveOnce(Instance instance, SolveOptions options, IProgress<TracePoint>? progress, CancellationToken cancel)
+        {
+            var plan = new InsertionSolver().Solve(instance, new SolveOptions(), null, default).Plan;
+            options.Incumbent!.Offer(plan, true, 1);
+            if (options.Seed != 1)
+            {
+                Thread.Sleep(TimeSpan.FromMinutes(10));
+            }
+
+            return new SolverResult(Name, Plan.Empty, 0, 0, [], SolverStatus.NoSolution) { HasPlan = false };
+        }
+    }
+
+    /// <summary>A solver that never looks at its clock or its token: blocks far past any budget, having offered <paramref name="offer"/>.</summary>
+    private sealed class Sleeper(Plan? offer = null) : ISolver
     {
         public string Name => "sleeper";
 
@@ -48,6 +102,11 @@ public sealed class RunDeadlineTests
 
         public SolverResult Solve(Instance instance, SolveOptions options, IProgress<TracePoint>? progress, CancellationToken cancel)
         {
+            if (offer is not null)
+            {
+                options.Incumbent!.Offer(offer, true, 1);
+            }
+
             Thread.Sleep(TimeSpan.FromMinutes(10));
             return new SolverResult(Name, Plan.Empty, 600, 600, [], SolverStatus.Completed);
         }
