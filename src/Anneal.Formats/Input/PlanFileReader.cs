@@ -116,9 +116,15 @@ public static class PlanFileReader
                 continue;
             }
 
+            // A driver's break is planned afresh by the evaluator of the re-plan.
+            if (kind == "break")
+            {
+                continue;
+            }
+
             if (kind != "stop")
             {
-                problems.Add(table, row.Line, "kind", kind, "unknown kind of row", "write start, stop or end");
+                problems.Add(table, row.Line, "kind", kind, "unknown kind of row", "write start, stop, break or end");
                 continue;
             }
 

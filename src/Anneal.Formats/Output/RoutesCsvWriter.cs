@@ -1,4 +1,5 @@
 using System.Globalization;
+using Anneal.Core.DrivingRules;
 using Anneal.Core.Evaluation;
 using Anneal.Core.Model;
 using Anneal.Core.Replanning;
@@ -8,7 +9,9 @@ namespace Anneal.Formats.Output;
 /// <summary>
 /// routes.csv, the drivers' sheet as data: per route the depot departure (kind <c>start</c>), one row per visit in
 /// order (<c>stop</c>) and the return (<c>end</c>), each with the leg driven from the row before, the evaluator's
-/// schedule and the load left on board. (Later kinds, such as a driver's break, only add rows.)
+/// schedule and the load left on board. Under driving rules each break is a row of its own (<c>break</c>, its start and
+/// departure, no stop) placed where it is taken; <c>drive</c> is always the driving since the row before, so a break
+/// that splits a leg carries the driving before it and the next row the rest (the leg's distance stays on that row).
 /// </summary>
 public static class RoutesCsvWriter
 {
@@ -51,25 +54,65 @@ public static class RoutesCsvWriter
             Row(csv, v.Id, 0, "start", start.Id, start.Name, start.Address, string.Empty, string.Empty, instance.Units.Format(route.Metrics.Departure),
                 string.Empty, string.Empty, string.Empty, 0, 0, onBoard);
             Handled(csv, instance, -1);
+            int sequence = 1, next = 0;
+            double[] carried = onBoard;
             for (int k = 0; k < route.Stops.Length; k++)
             {
                 int s = route.Stops[k];
                 var stop = instance.Stops[s];
                 var visit = route.Visits[k];
-                Row(csv, v.Id, k + 1, "stop", stop.Id, stop.Name, stop.Address, instance.Units.Format(visit.Arrival), instance.Units.Format(visit.Start),
+                next = Breaks(csv, instance, route, v.Id, k, next, after: false, ref sequence, carried);
+                Row(csv, v.Id, sequence++, "stop", stop.Id, stop.Name, stop.Address, instance.Units.Format(visit.Arrival), instance.Units.Format(visit.Start),
                     instance.Units.Format(visit.Departure), TimeText.Number(visit.Wait), TimeText.Number(visit.Late),
-                    TimeText.Window(instance, WindowUsed(stop, visit.Arrival)), travel.Distance(from, s), travel.Duration(from, s), route.LoadAfter[k]);
+                    TimeText.Window(instance, WindowUsed(stop, visit.Arrival)), travel.Distance(from, s), visit.Drive, route.LoadAfter[k]);
                 Handled(csv, instance, s);
+                carried = route.LoadAfter[k];
+                next = Breaks(csv, instance, route, v.Id, k, next, after: true, ref sequence, carried);
                 from = s;
             }
 
             int home = instance.DepotLocation(v.EndDepot);
-            Row(csv, v.Id, route.Stops.Length + 1, "end", end.Id, end.Name, end.Address, instance.Units.Format(route.Metrics.Return), string.Empty, string.Empty,
-                string.Empty, string.Empty, string.Empty, travel.Distance(from, home), travel.Duration(from, home), route.LoadAfter[^1]);
+            double lastLeg = travel.Duration(from, home);
+            for (int b = next; b < route.Breaks.Count; b++)
+            {
+                lastLeg -= route.Breaks[b].Drive;
+            }
+
+            Breaks(csv, instance, route, v.Id, route.Stops.Length, next, after: false, ref sequence, carried);
+            Row(csv, v.Id, sequence, "end", end.Id, end.Name, end.Address, instance.Units.Format(route.Metrics.Return), string.Empty, string.Empty,
+                string.Empty, string.Empty, string.Empty, travel.Distance(from, home), Math.Max(0, lastLeg), route.LoadAfter[^1]);
             Handled(csv, instance, -1);
         }
 
         csv.Flush();
+    }
+
+    /// <summary>The rows of the breaks taken at position <paramref name="k"/> before (or after) its service, from break <paramref name="next"/> on.</summary>
+    private static int Breaks(CsvHelper.CsvWriter csv, Instance instance, RouteEvaluation route, string vehicle, int k, int next, bool after, ref int sequence, double[] load)
+    {
+        var breaks = route.Breaks;
+        while (next < breaks.Count && breaks[next].Position == k && (breaks[next].Place == BreakPlace.AfterService) == after)
+        {
+            var b = breaks[next++];
+            Row(csv, vehicle, sequence++, "break", string.Empty, BreakName(b), string.Empty, string.Empty, instance.Units.Format(b.Start),
+                instance.Units.Format(b.End), string.Empty, string.Empty, string.Empty, 0, b.Drive, load);
+            Handled(csv, instance, -1);
+        }
+
+        return next;
+    }
+
+    /// <summary>What the driver sheet says of a break: its kind and where it is taken.</summary>
+    public static string BreakName(in PlannedBreak b)
+    {
+        string what = b.FirstPart ? "break, first part" : "break";
+        return b.Place switch
+        {
+            BreakPlace.Road => what + ", on the road",
+            BreakPlace.Waiting => what + ", while waiting for the window",
+            BreakPlace.AfterService => what + ", after service",
+            _ => what + ", on arrival",
+        };
     }
 
     private static void Header(CsvHelper.CsvWriter csv, Instance instance)

@@ -39,7 +39,26 @@ public sealed record PlanSummary(
     IReadOnlyList<string> Unserved,
     BreakdownSummary Breakdown,
     IReadOnlyList<ViolationSummary> Violations,
-    IReadOnlyList<StopSummary> UnservedStops);
+    IReadOnlyList<StopSummary> UnservedStops)
+{
+    /// <summary>Per route of a vehicle with driving rules: its driving, breaks and duty span (empty when no vehicle has rules).</summary>
+    public IReadOnlyList<RouteDrivingSummary> Driving { get; init; } = [];
+}
+
+/// <summary>
+/// One route's drivers' hours: the rule set with its source, minutes of driving, of breaks (waits that count included)
+/// and of duty span (depot to depot), the number of breaks, and the minutes over each rule (<c>driving-time</c>, <c>duty-span</c>).
+/// </summary>
+public sealed record RouteDrivingSummary(
+    string Vehicle,
+    string RuleSet,
+    string Source,
+    bool Hard,
+    double DrivingMinutes,
+    double BreakMinutes,
+    int Breaks,
+    double DutySpanMinutes,
+    IReadOnlyDictionary<string, double> Breaches);
 
 /// <summary>A stop as the input names it, for people: id, name and address (empty when the input gives none).</summary>
 public sealed record StopSummary(string Id, string Name, string Address);
@@ -55,7 +74,8 @@ public sealed record BreakdownSummary(
     double DurationExcess,
     double Unserved,
     double Total,
-    double Stability = 0);
+    double Stability = 0,
+    double DrivingOver = 0);
 
 /// <summary>What a re-plan changed against its given plan (summary.json's `changes`; changes.csv lists each stop).</summary>
 /// <param name="Now">`--now` as a clock time; null for a warm start.</param>

@@ -50,8 +50,32 @@ public static class SummaryJsonWriter
             evaluation.VehiclesUsed,
             evaluation.Feasible,
             unserved,
-            new BreakdownSummary(b.Fixed, b.Distance, b.Time, b.Vehicles, b.Lateness, b.Overload, b.Overtime, b.DurationExcess, b.Unserved, b.Total, b.Stability),
+            new BreakdownSummary(b.Fixed, b.Distance, b.Time, b.Vehicles, b.Lateness, b.Overload, b.Overtime, b.DurationExcess, b.Unserved, b.Total, b.Stability, b.DrivingOver),
             violations,
-            unservedStops);
+            unservedStops) { Driving = Driving(instance, evaluation) };
+    }
+
+    private static List<RouteDrivingSummary> Driving(Instance instance, PlanEvaluation evaluation)
+    {
+        var list = new List<RouteDrivingSummary>();
+        foreach (var route in evaluation.Routes)
+        {
+            var v = instance.Vehicles[route.Vehicle];
+            if (v.DrivingRules is not { } rules || route.Stops.Length == 0)
+            {
+                continue;
+            }
+
+            var m = route.Metrics;
+            var (drive, span) = Core.DrivingRules.BreakScheduler.Excess(instance, rules, m);
+            var breaches = new Dictionary<string, double>
+            {
+                [RuleKind.DrivingTime.ToText()] = drive,
+                [RuleKind.DutySpan.ToText()] = span,
+            };
+            list.Add(new RouteDrivingSummary(v.Id, rules.Name, rules.Source, rules.Rule.Hard, m.Driving, m.BreakMinutes, route.Breaks.Count, m.Return - m.Departure, breaches));
+        }
+
+        return list;
     }
 }

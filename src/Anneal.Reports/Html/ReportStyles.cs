@@ -27,6 +27,8 @@ internal static class ReportStyles
         #solver-table th, #solver-table td { padding: 4px 6px; }
         tr.chosen td { font-weight: bold; }
         tr.late td { background: #fbeeed; }
+        tr.break td { background: #efe9f8; color: var(--muted); }
+        tr.break td:first-child { border-left: 4px solid #c6b6e6; }
         tr.depot td { background: var(--band); color: var(--muted); }
         figure { margin: 10px 0 18px; }
         figure img { width: 100%; height: auto; border: 1px solid var(--line); }

@@ -47,6 +47,8 @@ internal static class RouteSheets
             h.Append(" · <span class=\"bad\">").Append(Num(m.Overtime, "0")).Append(' ').Append(unit).Append(" over the shift end</span>");
         }
 
+        DrivingLine(h, instance, route, v, unit);
+
         var start = instance.Depots[v.StartDepot];
         var end = instance.Depots[v.EndDepot];
         h.Append("</p><table><thead><tr><th class=\"n\">#</th><th>stop</th><th>name and address</th><th class=\"n\">arrival</th><th>window</th>")
@@ -54,10 +56,12 @@ internal static class RouteSheets
         h.Append("<tr class=\"depot\"><td class=\"n\">0</td><td>").Append(E(start.Id)).Append("</td><td>").Append(Place(start.Name, start.Address))
             .Append("</td><td class=\"n\"></td><td></td><td class=\"n\"></td><td class=\"n\">").Append(instance.Units.Format(m.Departure))
             .Append("</td><td>").Append(E(Load(instance, StartLoad(instance, route)))).Append("</td><td class=\"n\"></td></tr>");
+        int next = 0;
         for (int k = 0; k < route.Stops.Length; k++)
         {
             var stop = instance.Stops[route.Stops[k]];
             var visit = route.Visits[k];
+            next = BreakRows(h, instance, route, k, next, after: false);
             bool late = visit.Late > CostModel.FeasibilityTolerance;
             h.Append(late ? "<tr class=\"late\">" : "<tr>")
                 .Append("<td class=\"n\">").Append(k + 1).Append("</td>")
@@ -69,12 +73,61 @@ internal static class RouteSheets
                 .Append("<td class=\"n\">").Append(instance.Units.Format(visit.Departure)).Append("</td>")
                 .Append("<td>").Append(E(Load(instance, route.LoadAfter[k]))).Append("</td>")
                 .Append("<td class=\"n\">").Append(late ? Num(visit.Late, "0.#") : string.Empty).Append("</td></tr>");
+            next = BreakRows(h, instance, route, k, next, after: true);
         }
+
+        BreakRows(h, instance, route, route.Stops.Length, next, after: false);
 
         h.Append("<tr class=\"depot\"><td class=\"n\">").Append(route.Stops.Length + 1).Append("</td><td>").Append(E(end.Id)).Append("</td><td>")
             .Append(Place(end.Name, end.Address)).Append("</td><td class=\"n\">").Append(instance.Units.Format(m.Return))
             .Append("</td><td></td><td class=\"n\"></td><td class=\"n\"></td><td>back at the depot</td><td class=\"n\"></td></tr>");
         h.Append("</tbody></table></section>");
+    }
+
+    /// <summary>Under driving rules: the rule set with its source, the day's driving, breaks and duty span; a breach in red.</summary>
+    private static void DrivingLine(StringBuilder h, Instance instance, RouteEvaluation route, Vehicle v, string unit)
+    {
+        if (v.DrivingRules is not { } rules)
+        {
+            return;
+        }
+
+        var m = route.Metrics;
+        h.Append("<br>Driving rules ").Append(E(rules.Title)).Append(": ").Append(Num(m.Driving, "0")).Append(' ').Append(unit).Append(" driving · ")
+            .Append(route.Breaks.Count).Append(route.Breaks.Count == 1 ? " break, " : " breaks, ").Append(Num(m.BreakMinutes, "0")).Append(' ').Append(unit)
+            .Append(" · duty span ").Append(Num(m.Return - m.Departure, "0")).Append(' ').Append(unit);
+        var (drive, span) = Core.DrivingRules.BreakScheduler.Excess(instance, rules, m);
+        if (drive > CostModel.FeasibilityTolerance || span > CostModel.FeasibilityTolerance)
+        {
+            h.Append(" · <span class=\"bad\">").Append(rules.Rule.Hard ? "breaks the rules: " : "over the soft limits: ");
+            if (drive > CostModel.FeasibilityTolerance)
+            {
+                h.Append(Num(drive, "0")).Append(' ').Append(unit).Append(" more driving than allowed ");
+            }
+
+            if (span > CostModel.FeasibilityTolerance)
+            {
+                h.Append(Num(span, "0")).Append(' ').Append(unit).Append(" longer duty span than allowed ");
+            }
+
+            h.Append('(').Append(E(Cautions.All[1])).Append(")</span>");
+        }
+    }
+
+    /// <summary>The rows of the breaks taken at stop <paramref name="k"/> before (or after) its service, from break <paramref name="next"/> on.</summary>
+    private static int BreakRows(StringBuilder h, Instance instance, RouteEvaluation route, int k, int next, bool after)
+    {
+        var breaks = route.Breaks;
+        while (next < breaks.Count && breaks[next].Position == k && (breaks[next].Place == Core.DrivingRules.BreakPlace.AfterService) == after)
+        {
+            var b = breaks[next++];
+            h.Append("<tr class=\"break\"><td class=\"n\"></td><td>break</td><td>").Append(E(RoutesCsvWriter.BreakName(b))).Append(" · ")
+                .Append(Num(b.Minutes, "0")).Append(' ').Append(instance.Units.TimeWords).Append("</td><td class=\"n\"></td><td></td><td class=\"n\">")
+                .Append(instance.Units.Format(b.Start)).Append("</td><td class=\"n\">").Append(instance.Units.Format(b.End))
+                .Append("</td><td></td><td class=\"n\"></td></tr>");
+        }
+
+        return next;
     }
 
     /// <summary>The name in bold over the address, both encoded; empty when the input gives neither.</summary>

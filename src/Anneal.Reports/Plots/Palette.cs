@@ -17,6 +17,11 @@ public static class Palette
     public static Color Waiting { get; } = Color.FromHex("#f2d27c");
     public static Color Service { get; } = Color.FromHex("#4c9a5b");
     public static Color Window { get; } = Color.FromHex("#555555");
+
+    /// <summary>A driver's break: a light lavender, not a route hue and not the red of lateness.</summary>
+    public static Color Break { get; } = Color.FromHex(BreakHex);
+
+    public const string BreakHex = "#c6b6e6";
     public static Color Bound { get; } = Color.FromHex("#6a3d9a");
 
     public static Color Route(int k) => Routes[k % Routes.Length];

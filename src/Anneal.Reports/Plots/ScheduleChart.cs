@@ -10,7 +10,7 @@ namespace Anneal.Reports.Plots;
 /// band, and on its top row driving, waiting and service as bars. Under that row every stop has a row of its own, in
 /// visiting order and labelled with its stop id: the stop's windows as a thin line with end marks, and on the same
 /// line the waiting and service of the visit, level with the bars above, so each window sits beside its own visit.
-/// Lateness and overtime are red.
+/// Lateness and overtime are red; a driver's break (under driving rules) is lavender on the vehicle's row.
 /// </summary>
 public static class ScheduleChart
 {
@@ -53,6 +53,7 @@ public static class ScheduleChart
         double from = double.PositiveInfinity, to = double.NegativeInfinity;
         double top = 0;
         int used = 0;
+        bool breaks = false;
         foreach (var route in evaluation.Routes)
         {
             if (route.Stops.Length == 0)
@@ -70,6 +71,11 @@ public static class ScheduleChart
             from = Math.Min(from, Math.Min(v.ShiftStart, m.Departure));
             to = Math.Max(to, Math.Max(shiftEnd, m.Return));
             AddRoute(instance, route, y, bars, ticks, labelStops, Math.Max(1e-9, (m.Return - v.ShiftStart) * 0.003));
+            foreach (var b in route.Breaks)
+            {
+                bars.Add(Span(y, b.Start, b.End, BarSize, Palette.Break));
+                breaks = true;
+            }
             if (m.Overtime > Tolerance && double.IsFinite(v.ShiftEnd))
             {
                 bars.Add(Span(y - 0.33, v.ShiftEnd, m.Return, 0.12, Palette.Late));
@@ -91,7 +97,7 @@ public static class ScheduleChart
 
         plot.Axes.SetLimitsY(top - 0.05, 0.05);
         plot.XLabel(instance.Units.Clock ? "time of day" : "time");
-        Legend(plot);
+        Legend(plot, breaks);
         return plot;
     }
 
@@ -157,13 +163,19 @@ public static class ScheduleChart
         Orientation = Orientation.Horizontal,
     };
 
-    private static void Legend(Plot plot)
+    private static void Legend(Plot plot, bool breaks)
     {
-        foreach (var (label, color) in new[]
+        var items = new List<(string, Color)>
         {
             ("shift (tinted as on the map)", Colors.LightGray), ("driving", Palette.Driving), ("waiting", Palette.Waiting), ("service", Palette.Service),
             ("time window", Palette.Window), ("late / overtime", Palette.Late),
-        })
+        };
+        if (breaks)
+        {
+            items.Add(("driver's break", Palette.Break));
+        }
+
+        foreach (var (label, color) in items)
         {
             plot.Legend.ManualItems.Add(new LegendItem { LabelText = label, FillColor = color });
         }
