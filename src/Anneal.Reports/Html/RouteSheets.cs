@@ -110,7 +110,7 @@ internal static class RouteSheets
                 h.Append(Num(span, "0")).Append(' ').Append(unit).Append(" longer duty span than allowed ");
             }
 
-            h.Append('(').Append(E(Cautions.All[1])).Append(")</span>");
+            h.Append('(').Append(E(Cautions.DrivingRules)).Append(")</span>");
         }
     }
 
