@@ -11,7 +11,8 @@ namespace Anneal.OrTools;
 /// i + 1 stop i, a self-loop when the class does not serve the stop, and a dummy node n + 1 whose loop through the
 /// depot stands for "no route" (a multiple circuit needs at least one route). Arc literals carry the constraints:
 /// service start t, load delivered so far, and — when duration matters — the route's departure, each propagated
-/// along the true arcs. A stop is served by exactly one class, or dropped when it may be at its penalty.
+/// along the true arcs (with pickups, the load on board at every point and the pairs' order: <see cref="ExactPickupLoads"/>).
+/// A stop is served by exactly one class, or dropped when it may be at its penalty.
 /// Integers as in <see cref="IntegerScale"/>, so the optimum is Anneal's up to that scaling.
 /// </summary>
 public sealed class ExactModel
@@ -24,6 +25,9 @@ public sealed class ExactModel
     private readonly LinearExprBuilder _objective = LinearExpr.NewBuilder();
     private readonly List<ILiteral> _starts = [];
     private readonly bool _scheduleExact;
+
+    // Only for jobs with pickups: the load at every point and the pairs' precedence (null when delivery-only).
+    private readonly ExactPickupLoads? _pickups;
 
     public CpModel Model { get; } = new();
     public IntegerScale Scale { get; }
@@ -72,6 +76,7 @@ public sealed class ExactModel
             }
         }
 
+        _pickups = instance.HasPickups ? new ExactPickupLoads(Model, instance, Scale) : null;
         var servedBy = new List<ILiteral>[n];
         for (int i = 0; i < n; i++)
         {
@@ -289,6 +294,12 @@ public sealed class ExactModel
         circuit.AddArc(0, n + 1, noRoute).AddArc(n + 1, 0, noRoute).AddArc(n + 1, n + 1, noRoute.Not());
 
         var allowed = new bool[n];
+        var capacity = new long[inst.DimensionCount];
+        for (int d = 0; d < capacity.Length; d++)
+        {
+            capacity[d] = Scale.CapacityDown(v.Capacity[d]);
+        }
+
         for (int i = 0; i < n; i++)
         {
             allowed[i] = (inst.Stops[i].Needs & ~v.Equipment) == 0;
@@ -298,6 +309,7 @@ public sealed class ExactModel
             if (allowed[i])
             {
                 servedBy[i].Add(skip.Not());
+                _pickups?.Served(i, skip.Not(), capacity);
             }
             else
             {
@@ -328,6 +340,7 @@ public sealed class ExactModel
                     _starts.Add(x);
                     _objective.AddTerm(x, Scale.Cost(fixedCost));
                     int j = b - 1;
+                    _pickups?.Start(j, x, capacity);
                     if (durationMatters)
                     {
                         Model.Add(departure[j] >= Scale.TimeUp(v.ShiftStart)).OnlyEnforceIf(x);
@@ -341,11 +354,13 @@ public sealed class ExactModel
                 else if (b == 0)
                 {
                     Return(c, a - 1, x, transit, time, departure, load, durationMatters, hourly);
+                    _pickups?.Return(a - 1, x);
                 }
                 else
                 {
                     int i = a - 1, j = b - 1;
                     Model.Add(time[j] >= time[i] + transit).OnlyEnforceIf(x);
+                    _pickups?.Arc(i, j, x);
                     for (int d = 0; d < inst.DimensionCount; d++)
                     {
                         Model.Add(load[j, d] >= load[i, d] + Scale.DemandUp(inst.Demand(j, d))).OnlyEnforceIf(x);
@@ -382,7 +397,7 @@ public sealed class ExactModel
         for (int d = 0; d < inst.DimensionCount; d++)
         {
             double cap = v.Capacity[d];
-            if (double.IsPositiveInfinity(cap))
+            if (double.IsPositiveInfinity(cap) || _pickups is not null)
             {
                 continue;
             }

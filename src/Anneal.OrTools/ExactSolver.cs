@@ -28,7 +28,7 @@ public sealed class ExactSolver : ISolver
 
     public string? Declines(Instance instance) =>
         instance.StopCount > _settings.StopLimit ? $"{instance.StopCount} stops, above the exact model's limit of {_settings.StopLimit}"
-        : instance.HasPickups ? "the job has pickups; the exact model's load constraints count every load as leaving the depot and it has no precedence for pairs yet"
+        : instance.HasPickups && !instance.Rules.Capacity.Hard ? "the job has pickups and a soft capacity; the exact model prices overload only on the route's total load, which pickups make wrong"
         : DrivingRulesSupport.Declines(instance);
 
     public SolverResult Solve(Instance instance, SolveOptions options, IProgress<TracePoint>? progress, CancellationToken cancel)

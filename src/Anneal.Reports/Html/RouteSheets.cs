@@ -6,7 +6,10 @@ using static Anneal.Reports.Html.Text;
 
 namespace Anneal.Reports.Html;
 
-/// <summary>One sheet per vehicle used, to hand to its driver: the stops in order with arrival, window, load on board and minutes late.</summary>
+/// <summary>
+/// One sheet per vehicle used, to hand to its driver: the stops in order with arrival, window, load on board and minutes
+/// late; on a job with pickups also what is delivered and what is collected at each stop, with the pair's other stop.
+/// </summary>
 internal static class RouteSheets
 {
     public static void Write(StringBuilder h, ReportInput input)
@@ -51,11 +54,14 @@ internal static class RouteSheets
 
         var start = instance.Depots[v.StartDepot];
         var end = instance.Depots[v.EndDepot];
+        bool pickups = instance.HasPickups;
+        string blanks = pickups ? "<td></td><td></td>" : string.Empty;
         h.Append("</p><table><thead><tr><th class=\"n\">#</th><th>stop</th><th>name and address</th><th class=\"n\">arrival</th><th>window</th>")
-            .Append("<th class=\"n\">start of service</th><th class=\"n\">leaves</th><th>load on board after</th><th class=\"n\">").Append(unit).Append(" late</th></tr></thead><tbody>");
+            .Append("<th class=\"n\">start of service</th><th class=\"n\">leaves</th>").Append(pickups ? "<th>delivers</th><th>collects</th>" : string.Empty)
+            .Append("<th>load on board after</th><th class=\"n\">").Append(unit).Append(" late</th></tr></thead><tbody>");
         h.Append("<tr class=\"depot\"><td class=\"n\">0</td><td>").Append(E(start.Id)).Append("</td><td>").Append(Place(start.Name, start.Address))
             .Append("</td><td class=\"n\"></td><td></td><td class=\"n\"></td><td class=\"n\">").Append(instance.Units.Format(m.Departure))
-            .Append("</td><td>").Append(E(Load(instance, StartLoad(instance, route)))).Append("</td><td class=\"n\"></td></tr>");
+            .Append("</td>").Append(blanks).Append("<td>").Append(E(Load(instance, StartLoad(instance, route)))).Append("</td><td class=\"n\"></td></tr>");
         int next = 0;
         for (int k = 0; k < route.Stops.Length; k++)
         {
@@ -71,6 +77,7 @@ internal static class RouteSheets
                 .Append("<td>").Append(E(Windows(instance, stop))).Append("</td>")
                 .Append("<td class=\"n\">").Append(instance.Units.Format(visit.Start)).Append("</td>")
                 .Append("<td class=\"n\">").Append(instance.Units.Format(visit.Departure)).Append("</td>")
+                .Append(pickups ? Handed(instance, route.Stops[k]) : string.Empty)
                 .Append("<td>").Append(E(Load(instance, route.LoadAfter[k]))).Append("</td>")
                 .Append("<td class=\"n\">").Append(late ? Num(visit.Late, "0.#") : string.Empty).Append("</td></tr>");
             next = BreakRows(h, instance, route, k, next, after: true);
@@ -80,7 +87,7 @@ internal static class RouteSheets
 
         h.Append("<tr class=\"depot\"><td class=\"n\">").Append(route.Stops.Length + 1).Append("</td><td>").Append(E(end.Id)).Append("</td><td>")
             .Append(Place(end.Name, end.Address)).Append("</td><td class=\"n\">").Append(instance.Units.Format(m.Return))
-            .Append("</td><td></td><td class=\"n\"></td><td class=\"n\"></td><td>back at the depot</td><td class=\"n\"></td></tr>");
+            .Append("</td><td></td><td class=\"n\"></td><td class=\"n\"></td>").Append(blanks).Append("<td>back at the depot</td><td class=\"n\"></td></tr>");
         h.Append("</tbody></table></section>");
     }
 
@@ -124,10 +131,43 @@ internal static class RouteSheets
             h.Append("<tr class=\"break\"><td class=\"n\"></td><td>break</td><td>").Append(E(RoutesCsvWriter.BreakName(b))).Append(" · ")
                 .Append(Num(b.Minutes, "0")).Append(' ').Append(instance.Units.TimeWords).Append("</td><td class=\"n\"></td><td></td><td class=\"n\">")
                 .Append(instance.Units.Format(b.Start)).Append("</td><td class=\"n\">").Append(instance.Units.Format(b.End))
-                .Append("</td><td></td><td class=\"n\"></td></tr>");
+                .Append("</td>").Append(instance.HasPickups ? "<td></td><td></td>" : string.Empty).Append("<td></td><td class=\"n\"></td></tr>");
         }
 
         return next;
+    }
+
+    /// <summary>The delivers and collects cells of a stop: amounts per dimension, and for a pair the stop at its other end.</summary>
+    private static string Handed(Instance instance, int stop)
+    {
+        int dims = instance.DimensionCount;
+        var delivered = new double[dims];
+        var collected = new double[dims];
+        for (int d = 0; d < dims; d++)
+        {
+            delivered[d] = instance.Demand(stop, d);
+            collected[d] = instance.Pickup(stop, d);
+        }
+
+        int partner = instance.Partner(stop);
+        string other = partner < 0 ? string.Empty : instance.Stops[partner].Id;
+        string delivers = Handing(instance, delivered, partner >= 0 && !instance.IsCollection(stop) ? " collected at " + other : string.Empty);
+        string collects = Handing(instance, collected, partner >= 0 && instance.IsCollection(stop) ? " for " + other : string.Empty);
+        return "<td>" + E(delivers) + "</td><td>" + E(collects) + "</td>";
+    }
+
+    /// <summary>The amounts that are not zero, with a note; empty when there are none.</summary>
+    private static string Handing(Instance instance, double[] amounts, string note)
+    {
+        foreach (double a in amounts)
+        {
+            if (a != 0)
+            {
+                return Load(instance, amounts) + note;
+            }
+        }
+
+        return string.Empty;
     }
 
     /// <summary>The name in bold over the address, both encoded; empty when the input gives neither.</summary>

@@ -23,7 +23,7 @@ public sealed class SimulatedAnnealing : SeededSearch
 
     public override string Name => "sa";
 
-    public override string? Declines(Instance instance) => PickupSupport.Declines(instance);
+    public override string? Declines(Instance instance) => null;
 
     protected override SolverResult SolveOnce(Instance instance, SolveOptions options, IProgress<TracePoint>? progress, CancellationToken cancel) =>
         PhasedSearch.Run(Name, instance, options, _settings.Search, run => new AnnealingStep(run, _settings), progress, cancel);

@@ -17,6 +17,7 @@ public static class CheapestInsertion
         var best = default(MoveDraft);
         var types = VehicleTypes(state.Instance);
         var seen = new bool[types.Length == 0 ? 0 : types.Max() + 1];
+        var pairs = state.Instance.HasPairs ? new PairInsertion(state) : null;
         foreach (int u in order)
         {
             if (cancel.IsCancellationRequested)
@@ -26,6 +27,12 @@ public static class CheapestInsertion
 
             if (state.RouteOf(u) >= 0)
             {
+                continue;
+            }
+
+            if (pairs is not null && state.Instance.Partner(u) >= 0 && state.RouteOf(state.Instance.Partner(u)) < 0)
+            {
+                InsertPair(state, candidates, pairs, u, types, seen);
                 continue;
             }
 
@@ -69,6 +76,41 @@ public static class CheapestInsertion
         }
     }
 
+    /// <summary>
+    /// Both ends of u's pair at their best positions: on the routes of either end's neighbours and one empty vehicle
+    /// of each kind, or on every route when none of those is clean.
+    /// </summary>
+    private static void InsertPair(SearchState state, CandidateLists candidates, PairInsertion pairs, int u, int[] types, bool[] seen)
+    {
+        var instance = state.Instance;
+        int c = instance.IsCollection(u) ? u : instance.Partner(u);
+        int d = instance.Partner(c);
+        var best = PairInsertion.Choice.None;
+        pairs.ScanNear(c, d, candidates, feasibleOnly: false, ref best);
+        foreach (int empty in EmptyRoutePerType(state, types, seen))
+        {
+            pairs.Scan(c, d, empty, feasibleOnly: false, ref best);
+        }
+
+        if (best.Cost >= PairInsertion.BreakSurcharge)
+        {
+            for (int r = 0; r < state.RouteCount; r++)
+            {
+                if (!pairs.Scanned(r) && state.Length(r) > 0)
+                {
+                    pairs.Scan(c, d, r, feasibleOnly: false, ref best);
+                }
+            }
+        }
+
+        double unserved = Core.Evaluation.CostModel.UnservedObjective(instance, c) + Core.Evaluation.CostModel.UnservedObjective(instance, d);
+        bool mayStayOut = instance.MayDrop(c) && instance.MayDrop(d) && (best.Cost >= PairInsertion.BreakSurcharge || best.Cost >= unserved);
+        if (best.Route >= 0 && !mayStayOut)
+        {
+            pairs.Apply(c, d, best);
+        }
+    }
+
     // A position that breaks no further hard rule always beats one that does, however small the break:
     // any finite price could be undercut by a tiny time warp when a route is dear (vehicles-then-distance).
     private static void Consider(SearchState state, ref MoveDraft move, ref MoveDraft best, ref double bestDelta, bool built)
@@ -88,7 +130,7 @@ public static class CheapestInsertion
         }
     }
 
-    private const double BreakSurcharge = 1e18;
+    private const double BreakSurcharge = PairInsertion.BreakSurcharge;
 
     /// <summary>Vehicles that differ in nothing a route's cost or feasibility depends on share a type number.</summary>
     public static int[] VehicleTypes(Core.Model.Instance instance)

@@ -11,7 +11,7 @@ public sealed class InsertionSolver : ISolver
 {
     public string Name => "insertion";
 
-    public string? Declines(Instance instance) => Running.PickupSupport.Declines(instance);
+    public string? Declines(Instance instance) => null;
 
     public SolverResult Solve(Instance instance, SolveOptions options, IProgress<TracePoint>? progress, CancellationToken cancel)
     {

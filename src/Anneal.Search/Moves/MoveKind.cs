@@ -11,4 +11,10 @@ public enum MoveKind : byte
     Cross,
     Drop,
     Insert,
+
+    /// <summary>A collect-and-deliver pair moved to another route, both ends at once.</summary>
+    PairRelocate,
+
+    /// <summary>Two pairs on two routes swapped, end for end.</summary>
+    PairExchange,
 }

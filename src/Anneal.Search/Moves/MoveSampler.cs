@@ -14,6 +14,7 @@ public sealed class MoveSampler
     private readonly CandidateLists _candidates;
     private readonly SearchRandom _rng;
     private readonly bool _anyDroppable;
+    private readonly bool _pairs;
 
     /// <summary>One draw in this many picks an unserved stop when there are any.</summary>
     private const int UnservedOdds = 8;
@@ -27,6 +28,8 @@ public sealed class MoveSampler
         {
             _anyDroppable |= state.Instance.MayDrop(i);
         }
+
+        _pairs = state.Instance.HasPairs;
     }
 
     public bool Next(ref MoveDraft m)
@@ -57,6 +60,13 @@ public sealed class MoveSampler
         }
 
         int roll = _rng.Next(100);
+        if (_pairs && (roll >= 96 || (roll < 62 && s.RouteOf(u) != s.RouteOf(v))) && PairMoveBuilder.Ends(s, u, out _, out _))
+        {
+            // One end of a whole pair alone on another route would break it: both ends move together instead. (An
+            // end whose pair is broken already moves alone, which can mend it.)
+            return PairMove(ref m, u, v, roll);
+        }
+
         if (roll < 28)
         {
             return MoveBuilder.Relocate(s, ref m, u, v, _rng.Next(2) == 0);
@@ -98,6 +108,41 @@ public sealed class MoveSampler
 
         int empty = RandomEmptyRoute();
         return empty >= 0 && MoveBuilder.ToEmptyRoute(s, ref m, u, empty);
+    }
+
+    /// <summary>
+    /// A pair relocation beside v on v's (other) route, the other end beside one of its own candidate neighbours there
+    /// when that one comes in the right order, else next to the first end; a pair exchange with v's pair; or the pair
+    /// onto an empty route.
+    /// </summary>
+    private bool PairMove(ref MoveDraft m, int u, int v, int roll)
+    {
+        var s = _state;
+        int ru = s.RouteOf(u), rv = s.RouteOf(v);
+        if (roll >= 96)
+        {
+            int empty = RandomEmptyRoute();
+            return empty >= 0 && PairMoveBuilder.Relocate(s, ref m, u, empty, 0, 0);
+        }
+
+        if (roll < 40)
+        {
+            int partner = s.Instance.Partner(u);
+            int gapU = s.PositionOf(v) + _rng.Next(2);
+            int w = _candidates.At(partner, _rng.Next(_candidates.K));
+            bool collection = s.Instance.IsCollection(u);
+            int gapW = s.RouteOf(w) == rv ? s.PositionOf(w) + _rng.Next(2) : gapU;
+            if (collection ? gapW < gapU : gapW > gapU)
+            {
+                gapW = gapU;
+            }
+
+            return collection
+                ? PairMoveBuilder.Relocate(s, ref m, u, rv, gapU, gapW)
+                : PairMoveBuilder.Relocate(s, ref m, u, rv, gapW, gapU);
+        }
+
+        return PairMoveBuilder.Exchange(s, ref m, u, v);
     }
 
     /// <summary>An unused vehicle chosen at random (scan from a random start), or -1.</summary>

@@ -202,7 +202,9 @@ public sealed class MoveEvaluator
 
         // Hard driving rules share the duration's price (see CostModel.RouteViolation).
         parts.Violation.Duration += Amount(m.DrivingBreach, m) - Amount(old.DrivingBreach, old);
-        parts.Violation.Equipment += Amount(m.MissingEquipment, m) - Amount(old.MissingEquipment, old);
+
+        // A broken pair is priced as missing equipment is (CostModel.RouteViolation).
+        parts.Violation.Equipment += Amount(m.MissingEquipment + m.PairBreaks, m) - Amount(old.MissingEquipment + old.PairBreaks, old);
         return CostModel.RouteFeasible(_instance, m);
     }
 

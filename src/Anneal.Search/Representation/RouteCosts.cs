@@ -149,7 +149,7 @@ public sealed class RouteCosts
             v.Capacity += rules.Capacity.Hard ? m.Overload : 0;
             v.Overtime += rules.ShiftEnd.Hard ? m.Overtime : 0;
             v.Duration += (rules.MaxDuration.Hard ? m.DurationExcess : 0) + m.DrivingBreach;
-            v.Equipment += m.MissingEquipment;
+            v.Equipment += m.MissingEquipment + m.PairBreaks;
         }
 
         v.Unserved = MandatoryUnserved;

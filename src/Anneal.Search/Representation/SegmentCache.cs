@@ -34,6 +34,9 @@ public sealed class SegmentCache
     // Only for jobs where stops also collect: the load then changes along the route (null when delivery-only).
     private readonly LoadCache? _loads;
 
+    // Only for jobs with collect-and-deliver pairs (null otherwise).
+    private readonly PairCheck? _pairs;
+
     public SegmentCache(Instance instance, RouteStore store)
     {
         _instance = instance;
@@ -76,6 +79,7 @@ public sealed class SegmentCache
         }
 
         _loads = FastPath && instance.HasPickups ? new LoadCache(instance, store) : null;
+        _pairs = FastPath && instance.HasPairs ? new PairCheck(instance, store) : null;
     }
 
     /// <summary>Segment concatenation is exact here: hard single windows and at most four dimensions (for vehicles without driving rules).</summary>
@@ -234,6 +238,7 @@ public sealed class SegmentCache
         m.DurationExcess = Math.Max(0, m.Duration - costs.MaxDuration(vehicle));
         m.Overload = _loads is null ? Overload(vehicle, in acc) : _loads.Overload(ref draft, vehicle);
         m.MissingEquipment = System.Numerics.BitOperations.PopCount(acc.Needs & ~costs.Equipment(vehicle));
+        m.PairBreaks = _pairs is null ? 0 : _pairs.Breaks(ref draft);
         return m;
     }
 

@@ -1,3 +1,4 @@
+using Anneal.Search.Construction;
 using Anneal.Search.Moves;
 using Anneal.Search.Neighbourhoods;
 using Anneal.Search.Randomness;
@@ -23,6 +24,7 @@ public sealed class EjectionPool
     private int _poolCount;
     private RouteDraft _draft;
     private MoveDraft _move;
+    private readonly PairInsertion? _pairs;
 
     /// <summary>Random feasible moves tried after each ejection.</summary>
     public const int Shakes = 100;
@@ -35,6 +37,7 @@ public sealed class EjectionPool
         _sampler = new MoveSampler(state, candidates, rng);
         _pressure = new int[state.StopCount];
         _pool = new int[state.StopCount];
+        _pairs = state.Instance.HasPairs ? new PairInsertion(state) : null;
     }
 
     /// <summary>Stops waiting in the pool.</summary>
@@ -78,6 +81,11 @@ public sealed class EjectionPool
 
         long work = 0;
         int stop = _pool[--_poolCount];
+        if (_pairs is not null && TakePartner(stop) is int partner and >= 0)
+        {
+            return StepPair(stop, partner);
+        }
+
         if (InsertFeasibly(stop, ref work))
         {
             return work;
@@ -94,6 +102,49 @@ public sealed class EjectionPool
 
         work += Shake();
         return work;
+    }
+
+    /// <summary>Takes the stop's partner out of the pool when it waits there; returns it, or -1.</summary>
+    private int TakePartner(int stop)
+    {
+        int partner = _state.Instance.Partner(stop);
+        for (int k = 0; partner >= 0 && k < _poolCount; k++)
+        {
+            if (_pool[k] == partner)
+            {
+                Array.Copy(_pool, k + 1, _pool, k, _poolCount - k - 1);
+                _poolCount--;
+                return partner;
+            }
+        }
+
+        return -1;
+    }
+
+    /// <summary>
+    /// A pair from the pool at its cheapest feasible positions on a route of a neighbour of either end; when it fits
+    /// nowhere it waits at the bottom of the pool (pairs eject no other stops yet) and random moves change the routes.
+    /// </summary>
+    private long StepPair(int stop, int partner)
+    {
+        var s = _state;
+        var instance = s.Instance;
+        int c = instance.IsCollection(stop) ? stop : partner;
+        int d = instance.Partner(c);
+        var best = PairInsertion.Choice.None;
+        long work = _pairs!.ScanNear(c, d, _candidates, feasibleOnly: true, ref best);
+        if (best.Route >= 0)
+        {
+            _pairs!.Apply(c, d, best);
+            return work;
+        }
+
+        _pressure[c]++;
+        Array.Copy(_pool, 0, _pool, 2, _poolCount);
+        _pool[0] = c;
+        _pool[1] = d;
+        _poolCount += 2;
+        return work + Shake();
     }
 
     /// <summary>Cheapest feasible insertion next to one of the stop's candidate neighbours.</summary>

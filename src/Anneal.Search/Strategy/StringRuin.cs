@@ -1,4 +1,5 @@
 using Anneal.Core.Evaluation;
+using Anneal.Search.Construction;
 using Anneal.Search.Moves;
 using Anneal.Search.Neighbourhoods;
 using Anneal.Search.Randomness;
@@ -45,6 +46,7 @@ public sealed class StringRuin
     private MoveDraft _move;
     private readonly int[] _seen;
     private int _stamp;
+    private readonly PairInsertion? _pairs;
 
     public StringRuin(SearchState state, CandidateLists candidates, SearchRandom rng)
     {
@@ -62,6 +64,7 @@ public sealed class StringRuin
         _savedStart = new int[state.RouteCount];
         _savedLength = new int[state.RouteCount];
         _seen = new int[state.RouteCount];
+        _pairs = state.Instance.HasPairs ? new PairInsertion(state) : null;
     }
 
     /// <summary>
@@ -150,6 +153,40 @@ public sealed class StringRuin
             _ruined[r] = true;
             ruined++;
         }
+
+        if (_pairs is not null)
+        {
+            RemovePartners();
+        }
+    }
+
+    /// <summary>Whole pairs only: the partner of every removed stop leaves its route too.</summary>
+    private void RemovePartners()
+    {
+        var s = _state;
+        int removed = _removedCount;
+        for (int k = 0; k < removed; k++)
+        {
+            int partner = s.Instance.Partner(_removed[k]);
+            int r = partner >= 0 ? s.RouteOf(partner) : -1;
+            if (r < 0)
+            {
+                continue;
+            }
+
+            Save(r);
+            int kept = 0;
+            foreach (int stop in s.Route(r))
+            {
+                if (stop != partner)
+                {
+                    _buffer[kept++] = stop;
+                }
+            }
+
+            s.SetRoute(r, _buffer.AsSpan(0, kept));
+            _removed[_removedCount++] = partner;
+        }
     }
 
     /// <summary>Stops kept inside a split string: one more while a draw exceeds the paper's β = 0.01.</summary>
@@ -186,6 +223,16 @@ public sealed class StringRuin
         for (int k = 0; k < _removedCount; k++)
         {
             int stop = _removed[k];
+            if (_pairs is not null && instance.Partner(stop) >= 0)
+            {
+                if (_state.RouteOf(stop) < 0 && !RecreatePair(stop))
+                {
+                    return;
+                }
+
+                continue;
+            }
+
             if (!BestPosition(stop, out int anchor, out bool after, out double cost))
             {
                 if (!instance.MayDrop(stop))
@@ -205,6 +252,33 @@ public sealed class StringRuin
             MoveBuilder.Insert(_state, ref _move, stop, anchor, after);
             _state.Apply(ref _move);
         }
+    }
+
+    /// <summary>
+    /// Both ends of the stop's pair at their cheapest feasible positions on a route that serves a candidate neighbour
+    /// of either end. False when a mandatory pair fits nowhere (the attempt then fails).
+    /// </summary>
+    private bool RecreatePair(int stop)
+    {
+        var instance = _state.Instance;
+        int c = instance.IsCollection(stop) ? stop : instance.Partner(stop);
+        int d = instance.Partner(c);
+        var best = PairInsertion.Choice.None;
+        _pairs!.ScanNear(c, d, _candidates, feasibleOnly: true, ref best);
+        bool optional = instance.MayDrop(c) && instance.MayDrop(d);
+        if (best.Route < 0)
+        {
+            return optional;
+        }
+
+        if (optional && best.Cost >= CostModel.UnservedObjective(instance, c) + CostModel.UnservedObjective(instance, d))
+        {
+            return true;
+        }
+
+        Save(best.Route);
+        _pairs!.Apply(c, d, best);
+        return true;
     }
 
     /// <summary>Random order, or largest demand, farthest from the depot, or tightest window first (weights 4:4:2:1).</summary>

@@ -62,6 +62,12 @@ internal static class PairMoves
             return false;
         }
 
+        if (ru != rv && ru >= 0 && s.Instance.HasPairs && (pair.Kind is MoveKind.Relocate or MoveKind.Swap) && PairMoveBuilder.Ends(s, u, out _, out _))
+        {
+            // One end of a whole pair alone on another route would break it: the pair moves, or two pairs swap.
+            return pair.Kind == MoveKind.Relocate ? PairMoveBuilder.Beside(s, ref move, u, v, pair.After) : PairMoveBuilder.Exchange(s, ref move, u, v);
+        }
+
         return pair.Kind switch
         {
             MoveKind.Insert => rv >= 0 && MoveBuilder.Insert(s, ref move, u, v, pair.After),

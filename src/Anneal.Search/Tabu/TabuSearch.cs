@@ -22,7 +22,7 @@ public sealed class TabuSearch : SeededSearch
 
     public override string Name => "tabu";
 
-    public override string? Declines(Instance instance) => PickupSupport.Declines(instance);
+    public override string? Declines(Instance instance) => null;
 
     protected override SolverResult SolveOnce(Instance instance, SolveOptions options, IProgress<TracePoint>? progress, CancellationToken cancel) =>
         PhasedSearch.Run(Name, instance, options, _settings.Search, run => new TabuStep(run, _settings), progress, cancel);

@@ -4,21 +4,28 @@ using Anneal.Cli;
 namespace Anneal.Tests.Cli;
 
 /// <summary>
-/// `anneal solve` on the Li &amp; Lim file lc101 (Li &amp; Lim 2001): the plan's routes.csv is checked here on its own,
+/// `anneal solve` on the Li &amp; Lim file lc101 (Li &amp; Lim 2001), by each solver that takes pairs and by the
+/// default set: the plan's routes.csv is checked here on its own,
 /// without the evaluator, from the instance file's task lines: every task once, each pair on one vehicle with the
 /// pickup first, arrivals within the windows (service starts at max(arrival, earliest), Euclidean travel at speed 1)
 /// and the load on board (recomputed from the file's demands) within the capacity after every stop.
 /// </summary>
 public sealed class PickupSolveTests : CommandTest
 {
-    [SkippableFact]
-    public void Lc101_gives_a_plan_whose_routes_pass_an_independent_check()
+    // An iteration budget, not the clock, ends each search (for OR-Tools a solution limit), so every run is the same
+    // on any machine; "" runs the default solvers, as `anneal solve lc101.txt` does.
+    [SkippableTheory]
+    [InlineData("ortools", 2)]
+    [InlineData("sa", 20000)]
+    [InlineData("tabu", 100)]
+    [InlineData("insertion", 1)]
+    [InlineData("", 2)]
+    public void Lc101_gives_a_plan_whose_routes_pass_an_independent_check(string solvers, int iterations)
     {
         string file = BenchmarkData.File("lilim/lc101.txt");
         string outDir = Path.Combine(Dir, "lc101");
-
-        // A solution limit, not the clock, ends OR-Tools' search, so the run is the same on any machine.
-        int code = CliApp.Run(["solve", file, "--solvers", "ortools", "--iterations", "2", "--time", "120", "--out", outDir, "--quiet"], Out, Err);
+        string[] choice = solvers.Length > 0 ? ["--solvers", solvers] : [];
+        int code = CliApp.Run(["solve", file, .. choice, "--iterations", iterations.ToString(CultureInfo.InvariantCulture), "--time", "120", "--out", outDir, "--quiet"], Out, Err);
 
         Assert.True(code == 0, All);
         var tasks = Tasks(file, out double capacity);

@@ -6,11 +6,12 @@ namespace Anneal.Tests.Fixtures;
 /// <summary>
 /// Small random instances for property tests: windows, several dimensions, equipment, mixed rules; with
 /// <c>pickups</c>, about half the stops also collect (returns that ride to the depot), with amounts up to twice a
-/// delivery so that the fullest point is often in mid-route.
+/// delivery so that the fullest point is often in mid-route; with <c>pairs</c>, about a third of the stops are
+/// linked two by two as collect-and-deliver pairs (the collection picks up what its delivery stop receives).
 /// </summary>
 internal static class RandomInstances
 {
-    public static Instance Create(Random rng, int stops, int vehicles, bool hardWindows, bool multiWindows = false, int dims = 1, bool heterogeneous = false, bool pickups = false)
+    public static Instance Create(Random rng, int stops, int vehicles, bool hardWindows, bool multiWindows = false, int dims = 1, bool heterogeneous = false, bool pickups = false, bool pairs = false)
     {
         var stopList = new List<Stop>();
         int locs = stops + 1;
@@ -69,6 +70,11 @@ internal static class RandomInstances
             stopList[^1] = last with { Windows = [last.Windows[0], new TimeWindow(o2, o2 + 60)] };
         }
 
+        if (pairs)
+        {
+            LinkPairs(rng, stopList, dims);
+        }
+
         x[stops] = 50;
         y[stops] = 50;
         var fleet = new List<Vehicle>();
@@ -106,5 +112,25 @@ internal static class RandomInstances
         var objective = (Objective)rng.Next(3);
         return new Instance("random", stopList, [new Depot { Id = "depot", X = 50, Y = 50 }], fleet, dimNames, ["cold"], rules, objective,
             TravelTable.Planar(x, y, roundToInteger: rng.Next(2) == 0), Units.Minutes);
+    }
+
+    private static void LinkPairs(Random rng, List<Stop> stopList, int dims)
+    {
+        var order = Enumerable.Range(0, stopList.Count).OrderBy(_ => rng.Next()).ToArray();
+        int count = Math.Max(1, stopList.Count / 6);
+        for (int k = 0; k < count; k++)
+        {
+            int c = order[2 * k], d = order[(2 * k) + 1];
+            var amount = new double[dims];
+            for (int j = 0; j < dims; j++)
+            {
+                amount[j] = rng.Next(1, 40);
+            }
+
+            // A pair is served by both ends or by neither, so both share the one's optional flag.
+            bool optional = stopList[c].Optional;
+            stopList[c] = stopList[c] with { Demand = new double[dims], Pickup = amount, Optional = optional };
+            stopList[d] = stopList[d] with { Demand = (double[])amount.Clone(), Pickup = new double[dims], CollectFrom = c, Optional = optional };
+        }
     }
 }

@@ -69,6 +69,35 @@ internal static class TinyInstances
     }
 
     /// <summary>
+    /// <see cref="Random"/> with pickups: two collect-and-deliver pairs (the collection picks up what its delivery
+    /// receives; both ends share one optional flag) and returns at a third of the other stops, capacity hard.
+    /// </summary>
+    public static Instance WithPickups(int seed, int stops, int vehicles)
+    {
+        var rng = new Random(seed + 7000);
+        var basis = Random(seed, stops, vehicles);
+        var list = basis.Stops.ToList();
+        for (int k = 0; k < 2; k++)
+        {
+            int c = 2 * k, d = (2 * k) + 1;
+            double amount = rng.Next(5, 30);
+            list[c] = list[c] with { Demand = [0], Pickup = [amount] };
+            list[d] = list[d] with { Demand = [amount], Pickup = [0], CollectFrom = c, Optional = list[c].Optional };
+        }
+
+        for (int i = 4; i < list.Count; i++)
+        {
+            if (rng.Next(3) == 0)
+            {
+                list[i] = list[i] with { Pickup = [rng.Next(10, 40)] };
+            }
+        }
+
+        return new Instance(basis.Name + "-pickups", list, basis.Depots, basis.Vehicles, basis.DimensionNames, basis.EquipmentNames,
+            basis.Rules with { Capacity = Rule.HardRule }, basis.Objective, basis.Travel, basis.Units);
+    }
+
+    /// <summary>
     /// <see cref="Random"/> with two windows on most stops (a gap between them) and soft windows and shift ends,
     /// so plans are late and served in second windows. No per-hour cost: with several windows OR-Tools may leave
     /// later than Anneal's schedule, which changes only the route duration (see ScheduleApproximations).

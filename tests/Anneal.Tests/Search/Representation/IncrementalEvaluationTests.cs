@@ -22,7 +22,9 @@ public sealed class IncrementalEvaluationTests
     private const string MoveSeed = "7k2QpLm9Xa1B";
     private const int FixedCases = 200;
 
-    internal sealed record Case(int Seed, bool HardWindows, bool MultiWindows, int Dims, bool Heterogeneous, int Stops, int Vehicles, bool Pickups = false);
+    internal sealed record Case(int Seed, bool HardWindows, bool MultiWindows, int Dims, bool Heterogeneous, int Stops, int Vehicles, bool Pickups = false, bool Pairs = false);
+
+    internal delegate bool MoveMaker(Random rng, SearchState s, ref MoveDraft m);
 
     internal static readonly Gen<Case> Cases =
         Gen.Select(Gen.Int[0, 1_000_000], Gen.Bool, Gen.Bool, Gen.Int[1, 3], Gen.Bool, Gen.Int[6, 22], Gen.Int[2, 4],
@@ -78,11 +80,11 @@ public sealed class IncrementalEvaluationTests
         Assert.True(n > 10, $"only {n} moves were checked");
     }
 
-    internal static int CheckMoves(Case c)
+    internal static int CheckMoves(Case c, MoveMaker? makeMove = null)
     {
         int checkedMoves = 0;
         var rng = new Random(c.Seed);
-        var instance = RandomInstances.Create(rng, c.Stops, c.Vehicles, c.HardWindows, c.MultiWindows, c.Dims, c.Heterogeneous, c.Pickups);
+        var instance = RandomInstances.Create(rng, c.Stops, c.Vehicles, c.HardWindows, c.MultiWindows, c.Dims, c.Heterogeneous, c.Pickups, c.Pairs);
         var weights = new PenaltyWeights { TimeWindow = 3.5, Capacity = 7, Overtime = 2, Duration = 1.5, Equipment = 50, Unserved = 1000 };
         var state = new SearchState(instance, weights);
         Assert.Equal(c.HardWindows && instance.SingleWindows, state.FastPath);
@@ -90,7 +92,7 @@ public sealed class IncrementalEvaluationTests
         for (int step = 0; step < 60; step++)
         {
             var move = default(MoveDraft);
-            if (!RandomMove(rng, state, ref move))
+            if (!(makeMove ?? RandomMove)(rng, state, ref move))
             {
                 continue;
             }

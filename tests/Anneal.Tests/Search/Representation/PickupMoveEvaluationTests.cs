@@ -35,6 +35,53 @@ public sealed class PickupMoveEvaluationTests
     }
 
     [Fact]
+    public void Every_move_evaluation_with_pairs_and_returns_matches_the_exact_evaluator()
+    {
+        // Pair moves (both ends together) and every single-stop form, which may split or reorder a pair: the
+        // evaluator then counts the break (rule `pair`), and the incremental evaluation must count it the same.
+        int checkedMoves = 0;
+        int broken = 0;
+        PairCases.Array[250].Sample(all =>
+        {
+            foreach (var c in all)
+            {
+                checkedMoves += IncrementalEvaluationTests.CheckMoves(c, (Random rng, SearchState s, ref MoveDraft m) =>
+                {
+                    bool built = PairOrSingleMove(rng, s, ref m);
+                    broken += built && s.Evaluate(ref m).FeasibleAfter == false && PairBreaksAfter(s, ref m) > 0 ? 1 : 0;
+                    return built;
+                });
+            }
+        }, seed: PairSeed, iter: 1, threads: 1);
+        Assert.True(checkedMoves > 2000, $"only {checkedMoves} moves were checked");
+        Assert.True(broken > 200, $"only {broken} moves left a broken pair, too few to tell whether breaks are counted");
+    }
+
+    private const string PairSeed = "Qx7mNc2Ra9Tb";
+
+    private static readonly Gen<IncrementalEvaluationTests.Case> PairCases = IncrementalEvaluationTests.Cases.Select(c => c with { Pickups = true, Pairs = true });
+
+    private static bool PairOrSingleMove(Random rng, SearchState s, ref MoveDraft m)
+    {
+        int n = s.StopCount;
+        int u = rng.Next(n), v = rng.Next(n);
+        switch (rng.Next(4))
+        {
+            case 0:
+                int target = rng.Next(s.RouteCount);
+                int gapC = rng.Next(s.Length(target) + 1);
+                return PairMoveBuilder.Relocate(s, ref m, u, target, gapC, gapC + rng.Next(s.Length(target) - gapC + 1));
+            case 1:
+                return PairMoveBuilder.Exchange(s, ref m, u, v);
+            default:
+                return IncrementalEvaluationTests.RandomMove(rng, s, ref m);
+        }
+    }
+
+    private static int PairBreaksAfter(SearchState s, ref MoveDraft m) =>
+        s.Measure(ref m.A).PairBreaks + (m.RouteCount > 1 ? s.Measure(ref m.B).PairBreaks : 0);
+
+    [Fact]
     public void Drafted_overload_with_returns_matches_the_scheduler_where_the_route_total_would_not()
     {
         int midRoute = 0;
