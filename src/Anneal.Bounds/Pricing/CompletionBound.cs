@@ -27,8 +27,12 @@ public sealed class CompletionBound
     /// <summary>True when the last <see cref="Compute"/> produced a bound.</summary>
     public bool Ready { get; private set; }
 
-    /// <summary>Fills the table for the given duals; false (and not <see cref="Ready"/>) when the resource is too fine or absent.</summary>
-    public bool Compute(PricingNetwork net, double[] dual)
+    /// <summary>
+    /// Fills the table for the given duals; false (and not <see cref="Ready"/>) when the resource is too fine or
+    /// absent, or when <paramref name="cancel"/> fires first (a full table over 1,000 stops takes seconds on a
+    /// loaded machine, and the bound must keep its budget).
+    /// </summary>
+    public bool Compute(PricingNetwork net, double[] dual, CancellationToken cancel = default)
     {
         Ready = false;
         int n = net.N;
@@ -73,6 +77,11 @@ public sealed class CompletionBound
         double latest = net.Kind.LatestReturn;
         for (int b = _buckets - 1; b >= 0; b--)
         {
+            if (cancel.IsCancellationRequested)
+            {
+                return false;
+            }
+
             double edge = _origin + (b * _width);
             for (int j = 0; j < n; j++)
             {

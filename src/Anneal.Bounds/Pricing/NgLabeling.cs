@@ -49,7 +49,7 @@ public sealed class NgLabeling
         int dims = net.Dimensions;
         Prepare(n, dims);
         var best = new ColumnPool(maxColumns);
-        _completion.Compute(net, dual);
+        _completion.Compute(net, dual, cancel);
         double minClose = double.PositiveInfinity;
         bool complete = exact;
         var kind = net.Kind;

@@ -54,9 +54,9 @@ internal sealed class ColumnGeneration(RelaxedInstance relaxed, int minVehicles,
         {
             Rounds++;
             var lpClock = Stopwatch.StartNew();
-            if (!master.Solve(TimeSpan.FromSeconds(60)))
+            if (!master.Solve(TimeSpan.FromSeconds(60), stop))
             {
-                Failure = "the LP solver stopped with status " + master.LastStatus.ToString().ToLowerInvariant();
+                Failure = stop.IsCancellationRequested ? null : "the LP solver stopped with status " + master.LastStatus.ToString().ToLowerInvariant();
                 return;
             }
 

@@ -105,12 +105,16 @@ internal sealed class RestrictedMaster : IDisposable
         return true;
     }
 
-    /// <summary>Solves the LP; false when GLOP did not reach an optimal basis (then the duals are not used).</summary>
-    public bool Solve(TimeSpan limit)
+    /// <summary>
+    /// Solves the LP; false when GLOP did not reach an optimal basis (then the duals are not used). A stop
+    /// interrupts GLOP inside its solve, so that the bound keeps its budget however long an LP would take.
+    /// </summary>
+    public bool Solve(TimeSpan limit, CancellationToken stop)
     {
+        using var interrupt = stop.Register(() => _lp.InterruptSolve());
         _lp.SetTimeLimit((long)Math.Max(1, limit.TotalMilliseconds));
         LastStatus = _lp.Solve();
-        if (LastStatus != Solver.ResultStatus.OPTIMAL && !_presolve)
+        if (LastStatus != Solver.ResultStatus.OPTIMAL && !_presolve && !stop.IsCancellationRequested)
         {
             // Warm starts without presolve can run into numerical trouble; from then on GLOP solves with its defaults.
             _presolve = true;
