@@ -19,7 +19,7 @@ public static class CostModel
         var c = instance.Costs;
         return c.Base[vehicle] + (m.Distance * c.PerDistance[vehicle]) + (m.Duration * c.PerTime[vehicle])
             + (m.TimeWindowViolation * c.SoftTimeWindow) + (m.Overload * c.SoftCapacity)
-            + (m.Overtime * c.SoftOvertime) + (m.DurationExcess * c.SoftDuration) + (m.DrivingOver * c.DrivingPrice[vehicle]);
+            + (m.Overtime * c.SoftOvertime) + (m.DurationExcess * c.SoftDuration) + (m.DrivingOver * c.DrivingPrice[vehicle]) + m.Stability;
     }
 
     /// <summary>Weighted amount by which the route breaks hard rules (zero for a feasible route).</summary>

@@ -49,6 +49,12 @@ public sealed class CostTable
         }
 
         var rules = instance.Rules;
+        var prices = rules.Stability;
+        foreach (var s in instance.Stops)
+        {
+            PricesStability |= (s.PlannedVehicle >= 0 && prices.PerMove > 0) || (!double.IsNaN(s.PlannedStart) && prices.PerMinute > 0);
+        }
+
         (SoftTimeWindow, HardTimeWindow) = Split(rules.TimeWindows);
         (SoftCapacity, HardCapacity) = Split(rules.Capacity);
         (SoftOvertime, HardOvertime) = Split(rules.ShiftEnd);
@@ -72,6 +78,13 @@ public sealed class CostTable
         Objective.Distance => new(0, 1, 0),
         _ => new(instance.VehicleWeight, 1, 0),
     };
+
+    /// <summary>
+    /// True in a re-plan whose stops carry a planned vehicle or start with a price on it: every route's measures then
+    /// include its stability price (<see cref="RouteMetrics.Stability"/>), which needs each stop's start, so the search
+    /// measures routes by the scheduler.
+    /// </summary>
+    public bool PricesStability { get; }
 
     /// <summary>True when some vehicle works under driving rules.</summary>
     public bool DrivingRules { get; }

@@ -32,15 +32,14 @@ public static class PlanEvaluator
             var breaks = instance.Vehicles[route.Vehicle].DrivingRules is null ? null : new List<PlannedBreak>();
             var m = RouteScheduler.Schedule(instance, route.Vehicle, route.Stops, visits, breaks);
             var loads = RouteLoads.After(instance, route.Stops);
-            double routeStability = 0;
             for (int k = 0; k < route.Stops.Length; k++)
             {
                 served[route.Stops[k]] = true;
-                routeStability += CostModel.StopStability(instance, route.Stops[k], route.Vehicle, visits[k].Start);
             }
 
-            stability += routeStability;
-            double objective = CostModel.RouteObjective(instance, route.Vehicle, m) + routeStability;
+            // The route's stability price is in its measures (and so in its objective), from the starts just scheduled.
+            stability += m.Stability;
+            double objective = CostModel.RouteObjective(instance, route.Vehicle, m);
             bool drivable = CostModel.RouteFeasible(instance, m, Tolerance);
             routes.Add(new RouteEvaluation(route.Vehicle, route.Stops, m, visits, loads, objective, drivable) { Breaks = breaks ?? [] });
             foreach (int s in route.Stops)

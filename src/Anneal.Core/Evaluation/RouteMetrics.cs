@@ -32,4 +32,10 @@ public struct RouteMetrics
 
     /// <summary>The same minutes over when the vehicle's driving rules are soft (priced per minute).</summary>
     public double DrivingOver;
+
+    /// <summary>
+    /// The stability price of the route's stops in a re-plan (<see cref="CostModel.StopStability"/> summed over the
+    /// scheduled starts), so that every move is priced by it; zero when the instance prices no stability.
+    /// </summary>
+    public double Stability;
 }

@@ -43,12 +43,20 @@ public static class RouteScheduler
         int home = instance.DepotLocation(v.StartDepot);
         int end = instance.DepotLocation(v.EndDepot);
 
+        // The stability price needs every start; the search asks for none, so they go to a scratch of this thread.
+        bool stability = instance.Costs.PricesStability;
+        if (stability && visits.IsEmpty)
+        {
+            visits = Scratch(stops.Length);
+        }
+
         // The times written come from a second pass from the delayed departure, which serves every stop in the window
         // the first pass chose: the slack allows exactly that, and its rounding (an arrival 3e-14 past a close) must
         // not move a stop to a later window, which would make the times disagree with the measures.
         Span<int> windows = visits.IsEmpty ? Span<int>.Empty : stops.Length <= 256 ? stackalloc int[stops.Length] : new int[stops.Length];
         double departureDelay = Forward(instance, v, stops, v.ShiftStart, ref m, Span<VisitTimes>.Empty, windows, follow: false);
         double departure = v.ShiftStart + departureDelay;
+
         if (v.DrivingRules is not null)
         {
             BreakScheduler.Schedule(instance, vehicle, stops, departure, ref m, visits, breaks);
@@ -87,7 +95,31 @@ public static class RouteScheduler
         }
 
         m.Distance = distance + travel.Distance(stops[^1], end);
+        if (stability)
+        {
+            double price = 0;
+            for (int k = 0; k < stops.Length; k++)
+            {
+                price += CostModel.StopStability(instance, stops[k], vehicle, visits[k].Start);
+            }
+
+            m.Stability = price;
+        }
+
         return m;
+    }
+
+    [ThreadStatic]
+    private static VisitTimes[]? _scratch;
+
+    private static Span<VisitTimes> Scratch(int length)
+    {
+        if (_scratch is null || _scratch.Length < length)
+        {
+            _scratch = new VisitTimes[Math.Max(length, 2 * (_scratch?.Length ?? 32))];
+        }
+
+        return _scratch.AsSpan(0, length);
     }
 
     /// <summary>

@@ -45,7 +45,7 @@ public sealed class SegmentCache
         _store = store;
         _stops = store.Stops;
         _length = store.Lengths;
-        FastPath = instance.Rules.TimeWindows.Hard && instance.SingleWindows && instance.DimensionCount <= 4;
+        FastPath = instance.Rules.TimeWindows.Hard && instance.SingleWindows && instance.DimensionCount <= 4 && !instance.Costs.PricesStability;
         int routes = store.RouteCount;
         _prefix = new Segment[routes][];
         _suffix = new Segment[routes][];
@@ -82,7 +82,7 @@ public sealed class SegmentCache
         _pairs = FastPath && instance.HasPairs ? new PairCheck(instance, store) : null;
     }
 
-    /// <summary>Segment concatenation is exact here: hard single windows and at most four dimensions (for vehicles without driving rules).</summary>
+    /// <summary>Segment concatenation is exact here: hard single windows, at most four dimensions and no stability price (for vehicles without driving rules).</summary>
     public bool FastPath { get; }
 
     private static double Dim(Instance instance, int stop, int d) => d < instance.DimensionCount ? instance.Demand(stop, d) : 0;

@@ -22,7 +22,7 @@ public sealed class IncrementalEvaluationTests
     private const string MoveSeed = "7k2QpLm9Xa1B";
     private const int FixedCases = 200;
 
-    internal sealed record Case(int Seed, bool HardWindows, bool MultiWindows, int Dims, bool Heterogeneous, int Stops, int Vehicles, bool Pickups = false, bool Pairs = false);
+    internal sealed record Case(int Seed, bool HardWindows, bool MultiWindows, int Dims, bool Heterogeneous, int Stops, int Vehicles, bool Pickups = false, bool Pairs = false, bool Stability = false);
 
     internal delegate bool MoveMaker(Random rng, SearchState s, ref MoveDraft m);
 
@@ -80,14 +80,65 @@ public sealed class IncrementalEvaluationTests
         Assert.True(n > 10, $"only {n} moves were checked");
     }
 
+    /// <summary>
+    /// Issue 24: in a re-plan every move is priced by the stability rule too (a stop on another vehicle than planned,
+    /// a start moved beyond the tolerance), so the search prefers stable plans. The same fixed stream of cases as above,
+    /// each with most stops planned.
+    /// </summary>
+    [Fact]
+    public void Every_move_evaluation_matches_the_exact_evaluator_with_stability_prices()
+    {
+        int checkedMoves = 0;
+        var pcg = PCG.Parse(MoveSeed);
+        for (int i = 0; i < 60; i++)
+        {
+            var c = Cases.Generate(pcg, null, out _) with { Stability = true };
+            try
+            {
+                checkedMoves += CheckMoves(c);
+            }
+            catch (Exception e)
+            {
+                throw new Xunit.Sdk.XunitException($"case {i} of the fixed stream, {c}: {e.Message}", e);
+            }
+        }
+
+        Assert.True(checkedMoves > 1000, $"only {checkedMoves} moves were checked");
+    }
+
+    /// <summary>Most stops get a planned vehicle and start, as in a re-plan's residual day; prices high enough to matter.</summary>
+    private static Instance WithPlannedStops(Instance instance, Random rng)
+    {
+        var stops = new List<Stop>(instance.StopCount);
+        foreach (var s in instance.Stops)
+        {
+            bool planned = rng.NextDouble() < 0.8;
+            stops.Add(s with
+            {
+                PlannedVehicle = planned ? rng.Next(instance.Vehicles.Count) : -1,
+                PlannedStart = planned && rng.NextDouble() < 0.9 ? Math.Round(rng.NextDouble() * 600) : double.NaN,
+            });
+        }
+
+        var rules = instance.Rules with { Stability = new StabilityPrices(25, 1.5, 10) };
+        return new Instance(instance.Name, stops, instance.Depots, instance.Vehicles, instance.DimensionNames, instance.EquipmentNames, rules, instance.Objective,
+            instance.Travel, instance.Units) { LatLon = instance.LatLon };
+    }
+
     internal static int CheckMoves(Case c, MoveMaker? makeMove = null)
     {
         int checkedMoves = 0;
         var rng = new Random(c.Seed);
         var instance = RandomInstances.Create(rng, c.Stops, c.Vehicles, c.HardWindows, c.MultiWindows, c.Dims, c.Heterogeneous, c.Pickups, c.Pairs);
+        if (c.Stability)
+        {
+            instance = WithPlannedStops(instance, rng);
+            Assert.True(instance.Costs.PricesStability);
+        }
+
         var weights = new PenaltyWeights { TimeWindow = 3.5, Capacity = 7, Overtime = 2, Duration = 1.5, Equipment = 50, Unserved = 1000 };
         var state = new SearchState(instance, weights);
-        Assert.Equal(c.HardWindows && instance.SingleWindows, state.FastPath);
+        Assert.Equal(c.HardWindows && instance.SingleWindows && !c.Stability, state.FastPath);
         state.Load(RandomPlan(rng, instance));
         for (int step = 0; step < 60; step++)
         {
