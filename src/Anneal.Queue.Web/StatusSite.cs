@@ -83,7 +83,15 @@ public static class StatusSite
             }
         });
 
-        app.Lifetime.ApplicationStarted.Register(() => ServeLog.Started(log, ConnectionText.Describe(connection), string.Join(", ", app.Urls)));
+        app.Lifetime.ApplicationStarted.Register(() =>
+        {
+            if (log.IsEnabled(LogLevel.Information))
+            {
+                string database = ConnectionText.Describe(connection);
+                string urls = string.Join(", ", app.Urls);
+                ServeLog.Started(log, database, urls);
+            }
+        });
         app.Lifetime.ApplicationStopped.Register(() => ServeLog.Stopped(log));
         return app;
     }

@@ -88,7 +88,7 @@ public sealed class DeadWorkerRecovery(WorkerFolders folders, string selfId, Job
             {
                 // Its worker died between publishing the result and deleting the input.
                 Entries.Delete(path);
-                log.LogInformation("Job {JobId} left by dead worker {DeadWorker} was already published to {Folder}; its input is removed", entry.Job, deadId, published);
+                WorkerLog.DeadWorkerJobPublished(log, entry.Job, deadId, published);
             }
             else if (entry.Retries >= maxRetries)
             {
@@ -96,13 +96,12 @@ public sealed class DeadWorkerRecovery(WorkerFolders folders, string selfId, Job
                 string failed = FailedJobs.Move(folders, selfId, job, $"Job '{entry.Job}' was given up after {entry.Retries + 1} attempts.",
                     [$"Each time the worker solving it stopped without finishing (the last one was {deadId}).",
                      "A worker that is killed or runs out of memory on this job every time points at the job's size or at the machine; try it alone with `anneal solve`."]);
-                log.LogWarning("Job {JobId} left by dead worker {DeadWorker} failed for good after {Attempts} attempts: {Folder}", entry.Job, deadId, entry.Retries + 1, failed);
+                WorkerLog.DeadWorkerJobGivenUp(log, entry.Job, deadId, entry.Retries + 1, failed);
             }
             else
             {
                 string back = claimer.Return(path, entry.WithRetries(entry.Retries + 1));
-                log.LogWarning("Job {JobId} left by dead worker {DeadWorker} is back in the inbox as {Entry} (retry {Retry} of {MaxRetries})",
-                    entry.Job, deadId, Path.GetFileName(back), entry.Retries + 1, maxRetries);
+                WorkerLog.DeadWorkerJobRequeued(log, entry.Job, deadId, Path.GetFileName(back), entry.Retries + 1, maxRetries);
             }
         }
 

@@ -27,7 +27,7 @@ public sealed class JobProcessor(
             }
 
             string folder = FailedJobs.Move(folders, workerId, job, $"Job '{job.Id}' could not be read: {Count(lines.Count)} in the input.", lines);
-            log.LogWarning("Job {JobId} has invalid input ({Problems}; the first: {First}); moved to {Folder}", job.Id, Count(lines.Count), lines.Count > 0 ? lines[0] : "none named", folder);
+            WorkerLog.JobInvalid(log, job.Id, Count(lines.Count), lines.Count > 0 ? lines[0] : "none named", folder);
             return (JobResult.Failed, folder);
         }
         catch (Exception e) when (e is not OperationCanceledException)
@@ -67,17 +67,21 @@ public sealed class JobProcessor(
             return (JobResult.Requeued, claimer.Return(job.Path, job.Entry));
         }
 
-        log.LogInformation("Job {JobId} started (attempt {Attempt}): {Stops} stops, solvers {Solvers}, up to {Budget:0.#} s{Where}",
-            job.Id, job.Attempt, plan.Instance.StopCount, string.Join(",", plan.SolverNames), plan.Seconds,
-            options.Isolation == SolverIsolation.Process ? " in its own process" : string.Empty);
+        if (log.IsEnabled(LogLevel.Information))
+        {
+            string solvers = string.Join(",", plan.SolverNames);
+            WorkerLog.JobStarted(log, job.Id, job.Attempt, plan.Instance.StopCount, solvers, plan.Seconds,
+                options.Isolation == SolverIsolation.Process ? " in its own process" : string.Empty);
+        }
+
         foreach (var note in plan.Notes)
         {
-            log.LogInformation("Job {JobId}: {Note}", job.Id, note);
+            WorkerLog.JobNote(log, job.Id, note);
         }
 
         if (Oversubscription.Warning(plan.Solvers.Count, plan.Options.Threads, options.ConcurrentJobs, Environment.ProcessorCount) is { } crowded)
         {
-            log.LogWarning("Job {JobId}: {Warning}", job.Id, crowded);
+            WorkerLog.JobCrowded(log, job.Id, crowded);
         }
 
         string? partial = null;
@@ -127,8 +131,7 @@ public sealed class JobProcessor(
             result = best.Interrupted ? JobResult.Interrupted : JobResult.Solved;
         }
 
-        log.LogInformation("Job {JobId} {Outcome}: {Solver} objective {BestObjective:F2} ({Feasibility}), {Vehicles} vehicles, after {Elapsed:F1} s; written to {Folder}",
-            job.Id, result switch { JobResult.Solved => "solved", JobResult.Interrupted => "interrupted (kept as its result)", _ => "interrupted (plan written, job requeued)" },
+        WorkerLog.JobWritten(log, job.Id, result switch { JobResult.Solved => "solved", JobResult.Interrupted => "interrupted (kept as its result)", _ => "interrupted (plan written, job requeued)" },
             best.Solver, best.Objective, best.Feasible ? "feasible" : "infeasible", best.Vehicles, (now - job.ClaimedAt).TotalSeconds, published);
         return (result, published);
     }
@@ -158,8 +161,7 @@ public sealed class JobProcessor(
         }
 
         string back = claimer.Return(job.Path, job.Entry);
-        log.LogError("Job {JobId}: the outbox has no space left ({Reason}); its plan was not published, and it is back in the inbox as {Entry} with no attempt counted",
-            job.Id, reason, Path.GetFileName(back));
+        WorkerLog.JobNoSpace(log, job.Id, reason, Path.GetFileName(back));
         return (JobResult.NoSpace, back);
     }
 
@@ -172,7 +174,7 @@ public sealed class JobProcessor(
         catch (Exception e) when (e is IOException or UnauthorizedAccessException)
         {
             // Published already; recovery will find job.json and only remove the input then.
-            log.LogWarning("Job {JobId}: the solved input could not be removed from {Path}: {Reason}", job.Id, job.Path, e.Message);
+            WorkerLog.InputNotRemoved(log, job.Id, job.Path, e.Message);
         }
     }
 
@@ -184,7 +186,7 @@ public sealed class JobProcessor(
     {
         string folder = FailedJobs.Move(folders, workerId, job, $"Job '{job.Id}' could not be solved: {reason}.",
             ["The worker went on with the next job. If the input is sound, tell the maintainers what the job holds; the other solvers may still solve it (\"solvers\" in settings.json)."]);
-        log.LogError("Job {JobId} failed in its solver process: {Reason}; moved to {Folder}", job.Id, reason, folder);
+        WorkerLog.SolverProcessFailed(log, job.Id, reason, folder);
         return (JobResult.Failed, folder);
     }
 
@@ -194,19 +196,19 @@ public sealed class JobProcessor(
         if (!Entries.Exists(job.Path))
         {
             // It already left this worker's folder (the error came after); nothing to hand on.
-            log.LogError("Job {JobId} hit an error after its input was handed on: {Reason}", job.Id, reason);
+            WorkerLog.ErrorAfterHandOn(log, job.Id, reason);
             return (JobResult.Failed, job.Path);
         }
 
         if (job.Entry.Retries >= options.MaxRetries)
         {
             string folder = FailedJobs.Move(folders, workerId, job, $"Job '{job.Id}' was given up after {job.Attempt} attempts.", [$"The last attempt failed with: {reason}"]);
-            log.LogError("Job {JobId} failed for good after {Attempts} attempts: {Reason}; moved to {Folder}", job.Id, job.Attempt, reason, folder);
+            WorkerLog.JobGivenUp(log, job.Id, job.Attempt, reason, folder);
             return (JobResult.Failed, folder);
         }
 
         string back = claimer.Return(job.Path, job.Entry.WithRetries(job.Entry.Retries + 1));
-        log.LogError("Job {JobId} failed on attempt {Attempt}: {Reason}; back in the inbox as {Entry}", job.Id, job.Attempt, reason, Path.GetFileName(back));
+        WorkerLog.JobRetried(log, job.Id, job.Attempt, reason, Path.GetFileName(back));
         return (JobResult.Retry, back);
     }
 

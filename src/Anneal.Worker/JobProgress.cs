@@ -14,8 +14,7 @@ public sealed class JobProgress(ClaimedJob job, ILogger log, TimeProvider clock)
     {
         if (_points.Record(solver, point))
         {
-            log.LogInformation("Job {JobId}: {Solver} best {BestObjective:F2} ({Feasibility}) after {Elapsed:F1} s",
-                job.Id, solver, point.BestObjective, point.BestFeasible ? "feasible" : "infeasible", point.Seconds);
+            WorkerLog.JobProgress(log, job.Id, solver, point.BestObjective, point.BestFeasible ? "feasible" : "infeasible", point.Seconds);
         }
     }
 

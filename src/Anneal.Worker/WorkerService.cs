@@ -55,8 +55,7 @@ public sealed class WorkerService(
         var recovery = new DeadWorkerRecovery(folders, me.Id, claimer, o.MaxRetries, _log, clock);
         var processor = new JobProcessor(o, folders, me.Id, claimer, runner, writer, new ChildRun(solverProcess), _log, clock);
         var status = new StatusFile(StatusFile.PathFor(folders.Working, me.Id), me.Id, clock.GetUtcNow());
-        _log.LogInformation("Worker {WorkerId} watching {Inbox}; results to {Outbox}, failures to {Failed}; up to {Jobs} job(s) at a time, {Seconds:0.#} s each unless a job says otherwise{Once}",
-            me.Id, folders.Inbox, folders.Outbox, folders.Failed, o.ConcurrentJobs, o.TimeSeconds, run.Once ? "; stops when the inbox is empty" : string.Empty);
+        WorkerLog.WorkerStarted(_log, me.Id, folders.Inbox, folders.Outbox, folders.Failed, o.ConcurrentJobs, o.TimeSeconds, run.Once ? "; stops when the inbox is empty" : string.Empty);
 
         var running = new List<Task>();
         var backoff = new OutboxBackoff();
@@ -98,7 +97,7 @@ public sealed class WorkerService(
             catch (Exception e) when (e is IOException or UnauthorizedAccessException or OutputException)
             {
                 // A shared folder that hiccups must not end the night's work: log and poll again.
-                _log.LogError("Worker {WorkerId}: {Reason}; trying again", me.Id, e.Message);
+                WorkerLog.FolderError(_log, me.Id, e.Message);
             }
 
             // WhenAny never throws, so a stop request simply ends the wait; a finished job ends it early too.
@@ -108,13 +107,13 @@ public sealed class WorkerService(
 
         if (running.Count > 0)
         {
-            _log.LogInformation("Worker {WorkerId} stopping: {Running} running job(s) are writing their best plans", me.Id, running.Count);
+            WorkerLog.WorkerStopping(_log, me.Id, running.Count);
             TryWrite(status, "stopping");
             await Task.WhenAll(running);
         }
 
         TryWrite(status, "stopped");
-        _log.LogInformation("Worker {WorkerId} stopped", me.Id);
+        WorkerLog.WorkerStopped(_log, me.Id);
         if (run.FinishedByItself)
         {
             lifetime.StopApplication();
@@ -125,7 +124,7 @@ public sealed class WorkerService(
     {
         var progress = new JobProgress(job, _log, clock);
         status.Started(progress);
-        _log.LogInformation("Job {JobId} claimed from the inbox as {Entry}", job.Id, job.Entry.Name);
+        WorkerLog.JobClaimed(_log, job.Id, job.Entry.Name);
 
         // Solvers block their threads for the whole budget; long-running tasks keep them off the thread pool.
         return Task.Factory.StartNew(() =>
@@ -138,14 +137,14 @@ public sealed class WorkerService(
             catch (Exception e)
             {
                 // The job stays in this worker's folder; the next start-up recovers it with a retry counted.
-                _log.LogError("Job {JobId} could not be handed on: {Reason}; it stays in {Path}", job.Id, e.Message, job.Path);
+                WorkerLog.JobNotHandedOn(_log, job.Id, e.Message, job.Path);
                 done = (JobResult.Retry, job.Path);
             }
 
             if (done.Result == JobResult.NoSpace)
             {
                 var wait = backoff.Full(clock.GetUtcNow());
-                _log.LogError("Worker: the outbox is full; no job is claimed for {Seconds:0} s", wait.TotalSeconds);
+                WorkerLog.OutboxFull(_log, wait.TotalSeconds);
             }
             else if (done.Result is JobResult.Solved or JobResult.Interrupted or JobResult.Requeued)
             {
@@ -164,14 +163,14 @@ public sealed class WorkerService(
         }
         catch (OutputException e)
         {
-            _log.LogWarning("The status file cannot be written: {Reason}", e.Message);
+            WorkerLog.StatusNotWritten(_log, e.Message);
         }
     }
 
     private void Fail(Exception e)
     {
         run.Failure = e;
-        _log.LogCritical("The worker cannot run: {Reason}", e.Message);
+        WorkerLog.WorkerCannotRun(_log, e.Message);
         lifetime.StopApplication();
     }
 }

@@ -78,7 +78,12 @@ public sealed class QueueJobProcessor(
             return;
         }
 
-        QueueLog.JobStarted(log, job.Id, plan.Instance.StopCount, string.Join(",", plan.SolverNames), plan.Seconds);
+        if (log.IsEnabled(LogLevel.Information))
+        {
+            string solvers = string.Join(",", plan.SolverNames);
+            QueueLog.JobStarted(log, job.Id, plan.Instance.StopCount, solvers, plan.Seconds);
+        }
+
         var progress = new QueueProgress(job.Id, log, clock);
         using var search = CancellationTokenSource.CreateLinkedTokenSource(stop);
 

@@ -78,7 +78,12 @@ public sealed class QueueWorkerService(
 
         var claims = new Claims(db, me);
         var processor = new QueueJobProcessor(o, q, claims, new ResultStore(db, me), runner, writer, new Anneal.Worker.Isolation.ChildRun(solverProcess), me, _log, clock);
-        QueueLog.WorkerStarted(_log, me, ConnectionText.Describe(connection), o.ConcurrentJobs, o.TimeSeconds, q.LeaseSeconds, run.Once ? "; stops when the queue is empty" : string.Empty);
+        if (_log.IsEnabled(LogLevel.Information))
+        {
+            string database = ConnectionText.Describe(connection);
+            QueueLog.WorkerStarted(_log, me, database, o.ConcurrentJobs, o.TimeSeconds, q.LeaseSeconds, run.Once ? "; stops when the queue is empty" : string.Empty);
+        }
+
         await using var wakeup = new Wakeup(db, q, o.PollSeconds, _log, clock);
 
         var running = new List<Task>();
