@@ -127,7 +127,7 @@ public static class SolveCommand
         var w = context.Out;
         if (run.Interrupted)
         {
-            w.WriteLine("Interrupted: the best plan found so far is written.");
+            w.WriteLine($"Interrupted: the best plan found so far is written, without the pictures and report.html so that the stop is prompt (anneal plot {folder} draws them).");
         }
 
         PrintSolvers(w, run.Outcome);

@@ -86,5 +86,7 @@ public sealed class SignalTests : TempFolderTest
         Assert.Equal(solver, result.GetProperty("solver").GetString());
         Assert.Equal("interrupted", result.GetProperty("status").GetString());
         Assert.True(root.GetProperty("plan").GetProperty("vehicles").GetInt32() > 0, "the plan so far is written");
+        Assert.True(File.Exists(Path.Combine(Dir, "out", "routes.csv")));
+        Assert.False(File.Exists(Path.Combine(Dir, "out", "report.html")), "an interrupted run draws no pictures");
     }
 }
