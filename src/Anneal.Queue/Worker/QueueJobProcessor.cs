@@ -108,14 +108,15 @@ public sealed class QueueJobProcessor(
             case NotSolved { Outcome: ChildOutcome.Failed failed }:
                 // The same input would crash again: failed at once, with the reason, instead of costing its retries.
                 QueueLog.SolverFailed(log, job.Id, failed.Reason);
-                await PersistAsync(job, ct => store.FailAsync(job, $"The job could not be solved: {failed.Reason}. The other solvers may still solve it (\"solvers\" in settings.json).", ct), stop);
+                await EndUnsolvedAsync(job, ct => store.FailAsync(job, $"The job could not be solved: {failed.Reason}. The other solvers may still solve it (\"solvers\" in settings.json).", ct), stop);
                 return;
             case NotSolved { Outcome: ChildOutcome.NoSpace full }:
                 QueueLog.JobError(log, job.Id, job.Attempt, full.Reason, "queued again with no attempt counted (the worker's disk is full)");
-                await PersistAsync(job, ct => store.RetryAsync(job, full.Reason, countAttempt: false, ct), stop);
+                await EndUnsolvedAsync(job, ct => store.RetryAsync(job, full.Reason, countAttempt: false, ct), stop);
                 return;
             default:
-                await PersistAsync(job, ct => store.RetryAsync(job, null, countAttempt: false, ct), stop);
+                // Stopped before it wrote a plan (the worker stops, or the lease was lost and the search stopped early).
+                await EndUnsolvedAsync(job, ct => store.RetryAsync(job, null, countAttempt: false, ct), stop);
                 return;
         }
 
@@ -133,6 +134,16 @@ public sealed class QueueJobProcessor(
         {
             string said = !result.Interrupted ? "solved" : requeue ? "interrupted (plan stored, job queued again)" : "interrupted (kept as its result)";
             QueueLog.JobStored(log, job.Id, said, result.Solver, result.Objective, result.Feasible ? "feasible" : "infeasible", result.Vehicles, result.Seconds);
+        }
+    }
+
+    /// <summary>Ends a claim that has no plan to store; a claim taken over meanwhile is refused by the fence, as a late result is (2510).</summary>
+    private async Task EndUnsolvedAsync(QueueJob job, Func<CancellationToken, Task<bool>> end, CancellationToken stop)
+    {
+        var (written, accepted) = await PersistAsync(job, end, stop);
+        if (written && !accepted)
+        {
+            QueueLog.ResultRefused(log, job.Id, job.Claim);
         }
     }
 

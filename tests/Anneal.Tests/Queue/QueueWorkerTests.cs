@@ -193,11 +193,13 @@ public sealed class QueueWorkerTests(PostgresCluster cluster) : QueueTest(cluste
             stale.Continue();
         }
 
-        // Woken, the stale worker finds its claim superseded and its write is refused by the fencing token.
-        WaitUntil(() => Scalar<long>($"SELECT count(*) FROM job_events WHERE job_id = {id} AND event = 'refused' AND claim = 1") == 1, 30, () => stale.Log);
+        // Woken, the stale worker finds its claim superseded and its write is refused by the fencing token (and logs it:
+        // the line follows the refusal's commit, so wait for both). Its solver process may have written an interrupted
+        // plan or been stopped before one; either way the write is refused.
+        WaitUntil(() => Scalar<long>($"SELECT count(*) FROM job_events WHERE job_id = {id} AND event = 'refused' AND claim = 1") == 1
+            && stale.Log.Contains("[2510]", StringComparison.Ordinal), 30, () => stale.Log);
         stale.Terminate();
         Assert.True(stale.WaitForExit(30) == 130, stale.Log);
-        Assert.Contains("[2510]", stale.Log, StringComparison.Ordinal);
         Assert.Equal(2L, Scalar<long>($"SELECT claim FROM results WHERE job_id = {id}"));
         Assert.Equal(2, Scalar<int>($"SELECT attempt FROM results WHERE job_id = {id}"));
         AssertExactlyOnce(1);
