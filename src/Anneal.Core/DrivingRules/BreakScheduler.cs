@@ -11,11 +11,12 @@ namespace Anneal.Core.DrivingRules;
 /// The method is a labelling pass over the stops, in the spirit of the break scheduling of Goel (2009, "Vehicle
 /// scheduling and routing with drivers' working hours", Transportation Science 43(1)) — cited from memory, the paper was
 /// not at hand. A label is one way to have reached a stop: its clock, the driving since the last full break, whether
-/// the first part of a split break is taken, and the lateness so far. At each stop a label goes on in up to four ways:
+/// the first part of a split break is taken, and the lateness so far. At each stop a label goes on in up to five ways:
 /// no break; a full (or completing) break on arrival, before service; the first part of a split break on arrival; a
-/// break after service. Whatever the choice, a break is forced on the road the moment the next minute of driving would
-/// pass the limit (a leg split in two), and a wait for a window counts as a break, or as its first part, when it is long
-/// enough and the rule set says waiting counts. A label that is no earlier, has driven no less since its break, has no
+/// break after service; a wait long enough for a full break taken as only a split break's first part. Whatever the
+/// choice, a break is forced on the road the moment the next minute of driving would pass the limit (a leg split in
+/// two), and a wait for a window counts as a break, or as its first part, when it is long enough and the rule set says
+/// waiting counts. A label that can drive the rest of the route within the limit goes on without a break only. A label that is no earlier, has driven no less since its break, has no
 /// more of a split break behind it and is no less late than another is dropped (it cannot end better: waiting is always
 /// allowed and any break it could take, the other can take too). Voluntary breaks on the road are not tried: one is never
 /// better than the same break at the next stop before service. The set kept per stop is bounded
@@ -33,9 +34,9 @@ public static class BreakScheduler
 
     private const double Eps = 1e-9;
 
-    private const byte NoBreak = 0, BreakBefore = 1, PartBefore = 2, BreakAfter = 3;
+    private const byte NoBreak = 0, BreakBefore = 1, PartBefore = 2, BreakAfter = 3, WaitAsPart = 4;
 
-    private static ReadOnlySpan<byte> Order => [NoBreak, PartBefore, BreakBefore, BreakAfter];
+    private static ReadOnlySpan<byte> Order => [NoBreak, PartBefore, BreakBefore, BreakAfter, WaitAsPart];
 
     private struct Label
     {
@@ -56,6 +57,10 @@ public static class BreakScheduler
         public Label[] Labels = new Label[256];
         public int[] LayerStart = new int[64];
         public byte[] Choices = new byte[64];
+
+        /// <summary>Per leg k (to stop k; the last one home): its driving, and the driving from its start to the end of the route.</summary>
+        public double[] Legs = new double[64];
+        public double[] Rest = new double[65];
     }
 
     [ThreadStatic]
@@ -101,6 +106,7 @@ public static class BreakScheduler
         var lim = new Limits(rules, instance.Units);
         var arena = t_arena ??= new Arena();
         Ensure(arena, stops.Length);
+        double driving = Legs(instance, v, stops, arena);
 
         double departure = v.ShiftStart;
         var best = Pass(instance, v, stops, departure, lim, arena);
@@ -126,7 +132,6 @@ public static class BreakScheduler
         m.Return = best.Return;
         m.TimeWindowViolation = best.Late;
         m.BreakMinutes = best.Breaks;
-        double driving = Driving(instance, v, stops);
         m.Driving = driving;
         double span = best.Return - departure;
         m.Duration = span + (hard ? best.Late : 0);
@@ -150,16 +155,27 @@ public static class BreakScheduler
         return (Math.Max(0, m.Driving - lim.Daily), Math.Max(0, m.Return - m.Departure - lim.Span));
     }
 
-    private static double Driving(Instance instance, Vehicle v, ReadOnlySpan<int> stops)
+    /// <summary>Fills the legs' driving and what remains from each; returns the day's driving.</summary>
+    private static double Legs(Instance instance, Vehicle v, ReadOnlySpan<int> stops, Arena arena)
     {
         var travel = instance.Travel;
-        double total = travel.Duration(instance.DepotLocation(v.StartDepot), stops[0]);
-        for (int k = 1; k < stops.Length; k++)
+        var legs = arena.Legs;
+        var rest = arena.Rest;
+        int n = stops.Length;
+        legs[0] = travel.Duration(instance.DepotLocation(v.StartDepot), stops[0]);
+        for (int k = 1; k < n; k++)
         {
-            total += travel.Duration(stops[k - 1], stops[k]);
+            legs[k] = travel.Duration(stops[k - 1], stops[k]);
         }
 
-        return total + travel.Duration(stops[^1], instance.DepotLocation(v.EndDepot));
+        legs[n] = travel.Duration(stops[^1], instance.DepotLocation(v.EndDepot));
+        rest[n + 1] = 0;
+        for (int k = n; k >= 0; k--)
+        {
+            rest[k] = rest[k + 1] + legs[k];
+        }
+
+        return rest[0];
     }
 
     private static void Ensure(Arena arena, int n)
@@ -174,6 +190,8 @@ public static class BreakScheduler
         {
             arena.LayerStart = new int[(n + 2) * 2];
             arena.Choices = new byte[(n + 2) * 2];
+            arena.Legs = new double[(n + 2) * 2];
+            arena.Rest = new double[(n + 2) * 2];
         }
     }
 
@@ -181,22 +199,26 @@ public static class BreakScheduler
     {
         var labels = arena.Labels;
         var layer = arena.LayerStart;
+        var legs = arena.Legs;
+        var rest = arena.Rest;
         labels[0] = new Label { T = departure, Parent = -1 };
         layer[0] = 0;
         layer[1] = 1;
-        int prev = instance.DepotLocation(v.StartDepot);
         for (int k = 0; k < stops.Length; k++)
         {
             int from = layer[k], to = layer[k + 1];
             int count = 0;
             for (int i = from; i < to; i++)
             {
-                foreach (byte choice in Order)
+                // A label that can drive the rest of the route within the limit needs no break: any would only delay it.
+                int choices = labels[i].Drive + rest[k] <= lim.Drive + Eps ? 1 : Order.Length;
+                for (int c = 0; c < choices; c++)
                 {
+                    byte choice = Order[c];
                     var next = labels[i];
                     next.Parent = i;
                     next.Choice = choice;
-                    if (Step(instance, ref next, prev, stops[k], k, choice, lim, Span<VisitTimes>.Empty, null))
+                    if (Step(instance, ref next, legs[k], stops[k], k, choice, lim, Span<VisitTimes>.Empty, null))
                     {
                         count = Insert(labels, to, count, in next);
                     }
@@ -204,12 +226,10 @@ public static class BreakScheduler
             }
 
             layer[k + 2] = to + count;
-            prev = stops[k];
         }
 
         // The leg home closes every label; the best is the least late and over, then the earliest back.
-        int home = instance.DepotLocation(v.EndDepot);
-        double tail = instance.Travel.Duration(prev, home);
+        double tail = legs[stops.Length];
         var outcome = new Outcome { Key = double.PositiveInfinity, Return = double.PositiveInfinity };
         bool hard = instance.Rules.TimeWindows.Hard;
         for (int i = layer[stops.Length]; i < layer[stops.Length + 1]; i++)
@@ -300,14 +320,12 @@ public static class BreakScheduler
         }
 
         var state = new Label { T = departure };
-        int prev = instance.DepotLocation(v.StartDepot);
         for (int k = 0; k < stops.Length; k++)
         {
-            Step(instance, ref state, prev, stops[k], k, choices[k], lim, visits, breaks);
-            prev = stops[k];
+            Step(instance, ref state, arena.Legs[k], stops[k], k, choices[k], lim, visits, breaks);
         }
 
-        DriveLeg(ref state, instance.Travel.Duration(prev, instance.DepotLocation(v.EndDepot)), stops.Length, lim, breaks);
+        DriveLeg(ref state, arena.Legs[stops.Length], stops.Length, lim, breaks);
     }
 
     /// <summary>Drives a leg, taking a break on the road whenever the next minute would pass the limit.</summary>
@@ -337,10 +355,10 @@ public static class BreakScheduler
     }
 
     /// <summary>One stop under one choice; false when the choice makes no sense there (no driving since the last break).</summary>
-    private static bool Step(Instance instance, ref Label st, int prev, int s, int k, byte choice, in Limits lim,
+    private static bool Step(Instance instance, ref Label st, double leg, int s, int k, byte choice, in Limits lim,
         Span<VisitTimes> visits, List<PlannedBreak>? breaks)
     {
-        DriveLeg(ref st, instance.Travel.Duration(prev, s), k, lim, breaks);
+        DriveLeg(ref st, leg, k, lim, breaks);
         if ((choice == BreakBefore && !(st.Drive > Eps || st.Part)) || (choice == PartBefore && (!lim.Split || st.Part || st.Drive <= Eps)))
         {
             return false;
@@ -381,7 +399,18 @@ public static class BreakScheduler
         }
 
         st.Late += late;
-        if (lim.Waiting && wait > Eps && (st.Drive > Eps || st.Part))
+        if (choice == WaitAsPart)
+        {
+            // A wait long enough for a full break may instead stand as a split break's first part (only its end is
+            // the break; the rest is time at the stop): the next break is then the shorter second part.
+            if (!(lim.Waiting && lim.Split && !st.Part && st.Drive > Eps && wait >= lim.Full - Eps))
+            {
+                return false;
+            }
+
+            Take(ref st, start - lim.First, lim.First, k, BreakPlace.Waiting, true, breaks);
+        }
+        else if (lim.Waiting && wait > Eps && (st.Drive > Eps || st.Part))
         {
             if (wait >= lim.Full - Eps || (st.Part && wait >= lim.Second - Eps))
             {
