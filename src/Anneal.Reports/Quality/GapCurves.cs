@@ -1,11 +1,13 @@
 using Anneal.Core.Solving;
+using MathNet.Numerics.Statistics;
 
 namespace Anneal.Reports.Quality;
 
 /// <summary>
 /// Per solver, the median and interquartile range of the gap to the reference over instances and seeds, sampled on a
 /// log-spaced time grid. A run counts at a moment once it has a feasible plan; moments where fewer than half of a
-/// solver's runs have one are left out, so the median is never taken over a biased few.
+/// solver's runs have one are left out, so the median is never taken over a biased few. Quartiles interpolate between
+/// order statistics (Hyndman &amp; Fan 1996, definition 7; R's default), MathNet's R7, as the bench summary's do.
 /// </summary>
 public static class GapCurves
 {
@@ -58,8 +60,9 @@ public static class GapCurves
 
                 if (gaps.Count * 2 >= list.Count && gaps.Count > 0)
                 {
-                    gaps.Sort();
-                    points.Add(new GapPoint(t, Quantiles.Of(gaps, 0.5), Quantiles.Of(gaps, 0.25), Quantiles.Of(gaps, 0.75), gaps.Count));
+                    var sorted = gaps.ToArray();
+                    Array.Sort(sorted);
+                    points.Add(new GapPoint(t, Quartile(sorted, 0.5), Quartile(sorted, 0.25), Quartile(sorted, 0.75), gaps.Count));
                 }
             }
 
@@ -101,4 +104,6 @@ public static class GapCurves
         grid[^1] = to;
         return grid;
     }
+
+    private static double Quartile(double[] sorted, double p) => SortedArrayStatistics.QuantileCustom(sorted, p, QuantileDefinition.R7);
 }

@@ -44,12 +44,20 @@ public sealed class PlotTests
     }
 
     [Fact]
-    public void Quantiles_follow_the_interpolating_definition()
+    public void The_quality_band_follows_the_interpolating_quantile_definition()
     {
         // Hyndman & Fan (1996) definition 7, R's default: quantile(c(1,2,3,4), c(.25,.5,.75)) = 1.75, 2.5, 3.25.
-        double[] v = [1, 2, 3, 4];
-        Assert.Equal(1.75, Quantiles.Of(v, 0.25), 12);
-        Assert.Equal(2.5, Quantiles.Of(v, 0.5), 12);
-        Assert.Equal(3.25, Quantiles.Of(v, 0.75), 12);
+        // Four runs end 4%, 1%, 3% and 2% above their reference.
+        var runs = new List<BenchRun>();
+        double[] ends = [104, 101, 103, 102];
+        for (int k = 0; k < ends.Length; k++)
+        {
+            runs.Add(new BenchRun("i" + k, "sa", 1, [new TracePoint(0.01, 1, 130, 0, true, string.Empty), new TracePoint(1, 9, ends[k], 0, true, string.Empty)], 100));
+        }
+
+        var last = GapCurves.Compute(runs)["sa"][^1];
+        Assert.Equal(1.75, last.Lower, 9);
+        Assert.Equal(2.5, last.Median, 9);
+        Assert.Equal(3.25, last.Upper, 9);
     }
 }
