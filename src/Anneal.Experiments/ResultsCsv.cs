@@ -20,13 +20,14 @@ public static class ResultsCsv
 
     public static void Write(string path, IEnumerable<BenchRow> rows) => AtomicFile.WriteText(path, writer =>
     {
-        writer.WriteLine(string.Join(',', Columns));
+        using var csv = CsvOutput.Open(writer);
+        CsvOutput.Row(csv, Columns);
         foreach (var r in rows)
         {
-            writer.WriteLine(string.Join(',',
-                Quote(r.Instance), Quote(r.Solver), I(r.Seed), N(r.BudgetSeconds), r.Objective, N(r.ObjectiveValue), I(r.Vehicles), N(r.Distance),
-                r.Feasible ? "true" : "false", N(r.SecondsToBest), N(r.Seconds), N(r.Reference), I(r.ReferenceVehicles), N(r.GapPercent), Quote(r.TraceFile),
-                N(r.LowerBound), r.BoundOnly ? "true" : "false"));
+            CsvOutput.Row(csv,
+                r.Instance, r.Solver, I(r.Seed), N(r.BudgetSeconds), r.Objective, N(r.ObjectiveValue), I(r.Vehicles), N(r.Distance),
+                r.Feasible ? "true" : "false", N(r.SecondsToBest), N(r.Seconds), N(r.Reference), I(r.ReferenceVehicles), N(r.GapPercent), r.TraceFile,
+                N(r.LowerBound), r.BoundOnly ? "true" : "false");
         }
     });
 
@@ -94,8 +95,6 @@ public static class ResultsCsv
     private static string N(double? value) => value is { } v ? N(v) : string.Empty;
 
     private static string I(int? value) => value is { } v ? v.ToString(CultureInfo.InvariantCulture) : string.Empty;
-
-    private static string Quote(string text) => text.Contains(',') || text.Contains('"') ? "\"" + text.Replace("\"", "\"\"") + "\"" : text;
 
     /// <summary>Reads the cells of one row, noting each one that is not a number where a number belongs.</summary>
     private sealed class Cells(CsvReader csv, string path, List<InputProblem> problems)

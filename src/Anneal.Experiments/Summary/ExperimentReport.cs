@@ -23,8 +23,8 @@ public static class ExperimentReport
         var stats = ExperimentAnalysis.Compute(rows);
         var traced = ExperimentTraces.Load(outDir, rows, out int unreadable);
         var pictures = ExperimentPictures.Draw(outDir, rows, traced, TimeToTarget.DefaultPercents);
-        AtomicFile.WriteText(Path.Combine(outDir, StatisticsFile), w => SummaryTables.ConfigCsv(stats).ToList().ForEach(w.WriteLine));
-        AtomicFile.WriteText(Path.Combine(outDir, ComparisonsFile), w => SummaryTables.PairCsv(stats).ToList().ForEach(w.WriteLine));
+        AtomicFile.WriteText(Path.Combine(outDir, StatisticsFile), w => SummaryTables.WriteConfigCsv(w, stats));
+        AtomicFile.WriteText(Path.Combine(outDir, ComparisonsFile), w => SummaryTables.WritePairCsv(w, stats));
         var doc = Document(outcome, rows, stats, machine, referenceFile, pictures, unreadable, SummaryTables.Bounds(all));
         AtomicFile.WriteText(Path.Combine(outDir, MarkdownSummary.FileName), w => w.Write(MarkdownSummary.Render(doc)));
         AtomicFile.WriteText(Path.Combine(outDir, HtmlSummary.FileName), w => w.Write(HtmlSummary.Render(doc)));

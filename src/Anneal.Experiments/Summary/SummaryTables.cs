@@ -1,5 +1,6 @@
 using System.Globalization;
 using Anneal.Experiments.Analysis;
+using Anneal.Formats.Output;
 
 namespace Anneal.Experiments.Summary;
 
@@ -58,30 +59,29 @@ public static class SummaryTables
     }
 
     /// <summary>statistics.csv: one row per solver and budget, plain numbers for other tools.</summary>
-    public static IReadOnlyList<string> ConfigCsv(ExperimentStatistics stats)
+    public static void WriteConfigCsv(TextWriter writer, ExperimentStatistics stats)
     {
-        var lines = new List<string> { "solver,budget_s,runs,feasible,gap_runs,median_gap_pct,q1_gap_pct,q3_gap_pct,iqr_gap_pct,mean_gap_pct,ci95_low_pct,ci95_high_pct,best_on,instances" };
+        using var csv = CsvOutput.Open(writer);
+        CsvOutput.Row(csv, "solver", "budget_s", "runs", "feasible", "gap_runs", "median_gap_pct", "q1_gap_pct", "q3_gap_pct", "iqr_gap_pct", "mean_gap_pct",
+            "ci95_low_pct", "ci95_high_pct", "best_on", "instances");
         foreach (var c in stats.Configs)
         {
-            lines.Add(string.Join(',', Csv(c.Solver), N(c.Budget), I(c.Runs), I(c.Feasible), I(c.Gap.Count), N(c.Gap.Median), N(c.Gap.Q1), N(c.Gap.Q3), N(c.Gap.Iqr),
-                N(c.Gap.Mean), N(c.Gap.CiLow), N(c.Gap.CiHigh), I(c.BestCount), I(c.Instances)));
+            CsvOutput.Row(csv, c.Solver, N(c.Budget), I(c.Runs), I(c.Feasible), I(c.Gap.Count), N(c.Gap.Median), N(c.Gap.Q1), N(c.Gap.Q3), N(c.Gap.Iqr),
+                N(c.Gap.Mean), N(c.Gap.CiLow), N(c.Gap.CiHigh), I(c.BestCount), I(c.Instances));
         }
-
-        return lines;
     }
 
     /// <summary>comparisons.csv: one row per pair of solvers and budget.</summary>
-    public static IReadOnlyList<string> PairCsv(ExperimentStatistics stats)
+    public static void WritePairCsv(TextWriter writer, ExperimentStatistics stats)
     {
-        var lines = new List<string> { "budget_s,solver_a,solver_b,pairs,zeros,median_diff_pct,w_plus,w_minus,p_value,exact,z,lower" };
+        using var csv = CsvOutput.Open(writer);
+        CsvOutput.Row(csv, "budget_s", "solver_a", "solver_b", "pairs", "zeros", "median_diff_pct", "w_plus", "w_minus", "p_value", "exact", "z", "lower");
         foreach (var p in stats.Pairs)
         {
             string lower = p.Test.Direction < 0 ? p.A : p.Test.Direction > 0 ? p.B : string.Empty;
-            lines.Add(string.Join(',', N(p.Budget), Csv(p.A), Csv(p.B), I(p.Test.Pairs), I(p.Test.Zeros), N(p.Test.MedianDifference), N(p.Test.WPlus), N(p.Test.WMinus),
-                N(p.Test.PValue), p.Test.Exact ? "true" : "false", p.Test.Z is { } z ? N(z) : string.Empty, Csv(lower)));
+            CsvOutput.Row(csv, N(p.Budget), p.A, p.B, I(p.Test.Pairs), I(p.Test.Zeros), N(p.Test.MedianDifference), N(p.Test.WPlus), N(p.Test.WMinus),
+                N(p.Test.PValue), p.Test.Exact ? "true" : "false", p.Test.Z is { } z ? N(z) : string.Empty, lower);
         }
-
-        return lines;
     }
 
     public static string Seconds(double s) => s.ToString("0.###", CultureInfo.InvariantCulture) + " s";
@@ -92,6 +92,4 @@ public static class SummaryTables
     private static string N(double x) => double.IsFinite(x) ? x.ToString("0.######", CultureInfo.InvariantCulture) : string.Empty;
 
     private static string I(int x) => x.ToString(CultureInfo.InvariantCulture);
-
-    private static string Csv(string text) => text.Contains(',') || text.Contains('"') ? "\"" + text.Replace("\"", "\"\"") + "\"" : text;
 }

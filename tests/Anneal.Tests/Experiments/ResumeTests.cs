@@ -110,6 +110,20 @@ public sealed class ResumeTests : TempFolderTest
         Assert.Equal([plan], ResultsCsv.Read(path));
     }
 
+    [Fact]
+    public void Names_with_commas_quotes_and_line_breaks_are_quoted_and_read_back()
+    {
+        // RFC 4180 section 2, rules 6 and 7: a field holding a comma, a double quote or a line break is enclosed in
+        // double quotes, and a quote inside is doubled.
+        string path = Path.Combine(Dir, "results.csv");
+        var row = new BenchRow("depot north\r\nday 1", "say \"hi\"", 1, 5, "distance", 784, 5, 784, true, 2, 5, 784, 5, 0, "t,1.csv");
+        ResultsCsv.Write(path, [row]);
+        string text = File.ReadAllText(path);
+        Assert.Contains("\"depot north\r\nday 1\",\"say \"\"hi\"\"\",1,", text, StringComparison.Ordinal);
+        Assert.Contains(",\"t,1.csv\",", text, StringComparison.Ordinal);
+        Assert.Equal([row], ResultsCsv.Read(path));
+    }
+
     private List<LoadedInput> Instances()
     {
         var inputs = new List<LoadedInput>();
