@@ -17,6 +17,10 @@ public static class ParallelRuns
     /// <summary>How long past the budget (or a stop) the copies are waited for: less than the run's own tolerance.</summary>
     public static readonly TimeSpan Slack = TimeSpan.FromSeconds(1);
 
+    private static readonly TimeSpan MinimumShare = TimeSpan.FromMilliseconds(10);
+
+    private static readonly TimeSpan Poll = TimeSpan.FromMilliseconds(50);
+
     public static SolverResult Run(Func<ISolver> create, Instance instance, SolveOptions options, IProgress<TracePoint>? progress, CancellationToken cancel)
     {
         var clock = Stopwatch.StartNew();
@@ -24,16 +28,38 @@ public static class ParallelRuns
         var incumbent = options.Incumbent ?? new Incumbent();
         var giveUp = CancellationTokenSource.CreateLinkedTokenSource(cancel); // not disposed when a copy is left: it still reads it
         var results = new SolverResult?[n];
+        var done = new CountdownEvent(n); // not disposed: copies left behind still signal it
         var threads = new Thread[n];
         for (int k = 0; k < n; k++)
         {
             int index = k;
-            var own = options with { Threads = 1, Seed = options.Seed + (1000 * index), Incumbent = incumbent };
-            threads[k] = new Thread(() => Volatile.Write(ref results[index], create().Solve(instance, own, index == 0 ? progress : null, giveUp.Token))) { IsBackground = true };
-            threads[k].Start();
+            threads[k] = new Thread(() =>
+            {
+                try
+                {
+                    // A copy started late (starting 64 searching threads on 2 cores took 7 s) still ends at the
+                    // common deadline: its budget is what is left of the solver's.
+                    var left = options.TimeLimit - clock.Elapsed;
+                    var own = options with { Threads = 1, Seed = options.Seed + (1000 * index), Incumbent = incumbent, TimeLimit = left > MinimumShare ? left : MinimumShare };
+                    Volatile.Write(ref results[index], create().Solve(instance, own, index == 0 ? progress : null, giveUp.Token));
+                }
+                finally
+                {
+                    done.Signal();
+                }
+            }) { IsBackground = true };
         }
 
-        bool all = DeadlineJoin.Wait(threads, options.TimeLimit, Slack, clock, cancel);
+        // Started from a thread of their own: Thread.Start waits for each thread to run, which is slow when the
+        // copies already started keep the cores busy, and the wait below must not depend on it.
+        new Thread(() =>
+        {
+            foreach (var thread in threads)
+            {
+                thread.Start();
+            }
+        }) { IsBackground = true }.Start();
+        bool all = Wait(done, options.TimeLimit, clock, cancel);
 
         // What returned in time, read before the late copies are told to stop (a copy returning after that would
         // call itself interrupted).
@@ -92,5 +118,25 @@ public static class ParallelRuns
         }
 
         return chosen with { Notes = notes };
+    }
+
+    /// <summary>Waits for every copy until <see cref="Slack"/> past the budget or a stop request; true when all ended.</summary>
+    private static bool Wait(CountdownEvent done, TimeSpan budget, Stopwatch clock, CancellationToken stop)
+    {
+        TimeSpan? stopAt = null;
+        while (true)
+        {
+            stopAt ??= stop.IsCancellationRequested ? clock.Elapsed : null;
+            var left = (stopAt is { } at && at < budget ? at : budget) + Slack - clock.Elapsed;
+            if (left <= TimeSpan.Zero)
+            {
+                return done.IsSet;
+            }
+
+            if (done.Wait(left < Poll ? left : Poll, CancellationToken.None)) // polled: a stop moves the deadline, it does not end the wait
+            {
+                return true;
+            }
+        }
     }
 }
