@@ -34,6 +34,15 @@ public sealed class DrivingRulesDemoTests : CommandTest
         Assert.Contains("eu-561 (Regulation (EC) No 561/2006", report, StringComparison.Ordinal);
     }
 
+    [Fact]
+    public void Check_says_which_driving_rules_the_vehicles_work_under()
+    {
+        int code = CliApp.Run(["check", Demo], Out, Err);
+
+        Assert.Equal(ExitCodes.Success, code);
+        Assert.Contains("driving rules eu-561 (Regulation (EC) No 561/2006 Art. 6, 7 and 8): hard; 17 vehicle(s); a break of 45 min (or 15 then 30) after 270 min of driving", Out.ToString(), StringComparison.Ordinal);
+    }
+
     /// <summary>Checks one vehicle's rows in file order; returns its number of break rows.</summary>
     private static int Check(string vehicle, List<Dictionary<string, string>> rows)
     {
