@@ -12,7 +12,7 @@ public static partial class PlotFile
     {
         byte[] png = Png(plot, size);
         AtomicFile.Write(Path.Combine(folder, stem + ".png"), s => s.Write(png));
-        string svg = StableIds(plot.GetSvgXml((int)size.Width, (int)size.Height));
+        string svg = StableIds(SvgWithSolidLines(plot, size));
         AtomicFile.Write(Path.Combine(folder, stem + ".svg"), s => s.Write(Encoding.UTF8.GetBytes(svg)));
         return png;
     }
@@ -33,6 +33,36 @@ public static partial class PlotFile
 
             return id;
         });
+    }
+
+    /// <summary>
+    /// Skia's SVG canvas cannot write the dash effect of a patterned line: it draws the line solid anyway and prints
+    /// "Unsupported path effect in addPaint." to standard error for every segment (dozens of lines for a job with more
+    /// routes than hues). So the SVG is drawn with solid lines, as it would show them, and the patterns are put back.
+    /// </summary>
+    private static string SvgWithSolidLines(Plot plot, PixelSize size)
+    {
+        var patterned = new List<(IHasLine Line, LinePattern Pattern)>();
+        foreach (var plottable in plot.GetPlottables())
+        {
+            if (plottable is IHasLine line && !line.LinePattern.Equals(LinePattern.Solid))
+            {
+                patterned.Add((line, line.LinePattern));
+                line.LinePattern = LinePattern.Solid;
+            }
+        }
+
+        try
+        {
+            return plot.GetSvgXml((int)size.Width, (int)size.Height);
+        }
+        finally
+        {
+            foreach (var (line, pattern) in patterned)
+            {
+                line.LinePattern = pattern;
+            }
+        }
     }
 
     public static byte[] Png(Plot plot, PixelSize size) => plot.GetImageBytes((int)size.Width, (int)size.Height, ImageFormat.Png);

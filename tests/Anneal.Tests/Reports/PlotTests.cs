@@ -22,6 +22,29 @@ public sealed class PlotTests
     }
 
     [Fact]
+    public void Saving_the_svg_keeps_the_line_patterns_of_the_png()
+    {
+        // The SVG is drawn with solid lines (Skia's SVG canvas cannot write a dash effect); the patterns must be back
+        // afterwards, so a picture drawn after the save still shows route 13 dashed.
+        var plot = new ScottPlot.Plot();
+        var dashed = plot.Add.Scatter(new double[] { 0, 1, 2 }, new double[] { 0, 1, 0 });
+        dashed.LinePattern = ScottPlot.LinePattern.Dashed;
+        string folder = Directory.CreateTempSubdirectory("anneal-plot-").FullName;
+        try
+        {
+            byte[] saved = PlotFile.Save(plot, folder, "dashed", new ScottPlot.PixelSize(300, 200));
+
+            Assert.Equal(ScottPlot.LinePattern.Dashed, dashed.LinePattern);
+            Assert.Equal(saved, PlotFile.Png(plot, new ScottPlot.PixelSize(300, 200)));
+            Assert.Contains("<svg", File.ReadAllText(Path.Combine(folder, "dashed.svg")), StringComparison.Ordinal);
+        }
+        finally
+        {
+            Directory.Delete(folder, recursive: true);
+        }
+    }
+
+    [Fact]
     public void The_quality_plot_draws_median_and_band_per_solver()
     {
         var runs = new List<BenchRun>();
